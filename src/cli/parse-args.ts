@@ -1,0 +1,132 @@
+// Command-line words -> a plain record; every mistake is a one-line message naming the option.
+export interface CliArgs {
+  file?: string;
+  format: 'json' | 'markdown' | 'text';
+  bins?: string;
+  edges?: string;
+  delimiter?: string;
+  quote?: string;
+  encoding?: string;
+  header?: boolean;
+  decimal?: '.' | ',';
+  groupBy: string[];
+  metadata?: string;
+  noMetadata: boolean;
+  rules?: string;
+  failOn: string[];
+  quantileType?: number;
+  top?: number;
+  missing?: string[];
+  maxFlags?: number;
+  maxRecords?: number;
+  significantDigits?: number;
+  quiet: boolean;
+  help: boolean;
+  version: boolean;
+}
+
+export const USAGE = `Usage: assay FILE [options]
+
+Profiles a delimited data file (CSV, TSV, semicolon or pipe separated) and prints what it holds.
+
+Output
+  --format text|markdown|json   text (default): facts, columns and flags with file:line:column;
+                                markdown: the full report; json: the profile (docs/profile.md)
+  --significant-digits N        digits shown for numbers (default 4)
+Reading
+  --delimiter C                 field delimiter (, ; tab |); sniffed when absent
+  --quote C                     quote character; sniffed when absent
+  --header | --no-header        whether the first record names the columns
+  --decimal-comma               numbers use a decimal comma (1,5)
+  --encoding E                  utf-8, utf-16le, utf-16be or windows-1252; detected when absent
+  --missing LIST                comma-separated missing-value tokens (empty cells always count)
+  --max-records N               read only the first N records (a partial profile)
+Summaries
+  --bins RULE|N|width=W         sqrt, sturges, rice, doane, scott, fd (default), auto, a count or a width
+  --edges nice|exact            nice (default): rounded widths, every interval [a, b);
+                                exact: equal widths from min to max, last interval closed
+  --quantile-type N             Hyndman & Fan definition 1-9 (default 7)
+  --top N                       rows of each frequency table (default 50)
+  --group-by COLUMN             compare every numeric column across the groups of COLUMN (repeatable)
+Flags and constraints
+  --rules LIST                  comma-separated rule ids to run, or all
+  --max-flags N                 findings kept per rule and column (default 1000; totals still counted)
+  --metadata PATH               CSV on the Web metadata (default: FILE-metadata.json or csv-metadata.json)
+  --no-metadata                 do not look for metadata beside the file
+  --fail-on LIST                exit 1 when any of: flags, invalid, constraints
+Other
+  -q, --quiet                   no progress on stderr
+  -h, --help, --version
+
+Exit status: 0 done, 1 a --fail-on condition was met, 2 unreadable input or bad options.
+`;
+
+const FORMATS = ['json', 'markdown', 'text'];
+const FAIL_ON = ['flags', 'invalid', 'constraints'];
+
+function whole(name: string, v: string, min: number): number {
+  if (!/^\d+$/.test(v) || Number(v) < min) throw new Error(`${name}: expected a whole number of at least ${min}, got "${v}"`);
+  return Number(v);
+}
+
+export function parseArgs(argv: string[]): CliArgs {
+  const a: CliArgs = { format: 'text', groupBy: [], noMetadata: false, failOn: [], quiet: false, help: false, version: false };
+  for (let i = 0; i < argv.length; i++) {
+    const word = argv[i]!;
+    const eq = word.startsWith('--') ? word.indexOf('=') : -1;
+    const name = eq > 0 ? word.slice(0, eq) : word;
+    const inline = eq > 0 ? word.slice(eq + 1) : undefined;
+    const value = (): string => {
+      if (inline !== undefined) return inline;
+      const v = argv[++i];
+      if (v === undefined) throw new Error(`${name}: expects a value`);
+      return v;
+    };
+    switch (name) {
+      case '-h': case '--help': a.help = true; break;
+      case '--version': a.version = true; break;
+      case '-q': case '--quiet': a.quiet = true; break;
+      case '--format': {
+        const f = value();
+        if (!FORMATS.includes(f)) throw new Error(`--format: expected json, markdown or text, got "${f}"`);
+        a.format = f as CliArgs['format'];
+        break;
+      }
+      case '--bins': a.bins = value(); break;
+      case '--edges': {
+        const e = value();
+        if (e !== 'nice' && e !== 'exact') throw new Error(`--edges: expected nice or exact, got "${e}"`);
+        a.edges = e;
+        break;
+      }
+      case '--delimiter': a.delimiter = value(); break;
+      case '--quote': a.quote = value(); break;
+      case '--encoding': a.encoding = value().toLowerCase(); break;
+      case '--header': a.header = true; break;
+      case '--no-header': a.header = false; break;
+      case '--decimal-comma': a.decimal = ','; break;
+      case '--group-by': a.groupBy.push(value()); break;
+      case '--metadata': a.metadata = value(); break;
+      case '--no-metadata': a.noMetadata = true; break;
+      case '--rules': a.rules = value(); break;
+      case '--fail-on': {
+        for (const f of value().split(',').map((s) => s.trim()).filter(Boolean)) {
+          if (!FAIL_ON.includes(f)) throw new Error(`--fail-on: expected flags, invalid or constraints, got "${f}"`);
+          a.failOn.push(f);
+        }
+        break;
+      }
+      case '--quantile-type': a.quantileType = whole('--quantile-type', value(), 1); break;
+      case '--top': a.top = whole('--top', value(), 1); break;
+      case '--max-flags': a.maxFlags = whole('--max-flags', value(), 1); break;
+      case '--max-records': a.maxRecords = whole('--max-records', value(), 1); break;
+      case '--significant-digits': a.significantDigits = whole('--significant-digits', value(), 1); break;
+      case '--missing': a.missing = ['', ...value().split(',')]; break;
+      default:
+        if (word.startsWith('-') && word !== '-') throw new Error(`${word}: unknown option (try --help)`);
+        if (a.file !== undefined) throw new Error(`expected one input file, got "${a.file}" and "${word}"`);
+        a.file = word;
+    }
+  }
+  return a;
+}

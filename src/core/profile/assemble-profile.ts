@@ -1,0 +1,170 @@
+// Assembles the Profile once the input has ended: every column, the record-level findings, and the
+// exact position of each kept flag (read back from the record's bytes).
+import type { ProfileResult } from '../engine';
+import { spanOfField, spanOfRecord } from '../read/cell-span';
+import { assembleColumn } from './assemble-column';
+import { capFlags, type PendingFlag } from './column-flags';
+import { fieldTextAt } from './field-text';
+import type { JobState } from './job';
+import type { ColumnProfile, Flag, FlagTotal, Profile } from './types';
+
+/** Bytes read back for a record whose end is not known (the last one): enough for any sane record. */
+const TAIL_READ = 1 << 20;
+
+export function assembleProfile(st: JobState, read: ((offset: number, length: number) => Uint8Array) | null): ProfileResult {
+  const { options, records } = st;
+  const offsets = records.offsets.view().slice();
+  const lines = records.lines.view().slice();
+  const recordLength = (row: number): number => {
+    const next = offsets[row];
+    return next !== undefined ? next - offsets[row - 1]! : Math.max(0, Math.min(TAIL_READ, st.bytes - offsets[row - 1]!));
+  };
+  const readRow = read ? (row: number) => read(offsets[row - 1]!, recordLength(row)) : null;
+
+  const columns: ColumnProfile[] = [];
+  const allPending: { column: ColumnProfile | null; flags: PendingFlag[] }[] = [];
+  st.columns.forEach((acc, i) => {
+    const name = st.names[i]!;
+    const { column, pending } = assembleColumn(acc, name, i, {
+      options,
+      declaredType: options.types[name] ?? null,
+      declaredLevel: null,
+      missingTokens: options.missingTokens,
+      primaryKey: false,
+    });
+    columns.push(column);
+    allPending.push({ column, flags: pending });
+  });
+
+  // Record-level findings.
+  const recordPending: PendingFlag[] = [];
+  if (options.rules.enabled.has('ragged-row')) {
+    for (const g of records.ragged) {
+      recordPending.push({
+        row: g.row, field: null, rule: 'ragged-row', severity: 'warning',
+        message: `Record ${g.row} has ${g.fields} field${g.fields === 1 ? '' : 's'} where the header has ${g.expected}; ${g.fields < g.expected ? 'the missing fields count as missing' : 'the extra fields are not profiled'}.`,
+      });
+    }
+  }
+  let duplicateRecords = records.duplicateTotal;
+  if (options.rules.enabled.has('duplicate-record')) {
+    for (const d of records.duplicates) {
+      if (readRow && !sameBytes(readRow(d.row), readRow(d.first), st)) {
+        duplicateRecords--;
+        continue;
+      }
+      recordPending.push({
+        row: d.row, field: null, rule: 'duplicate-record', severity: 'information',
+        message: `Record ${d.row} repeats record ${d.first} exactly (line ${lines[d.first - 1]}); a candidate for review.`,
+      });
+    }
+  }
+
+  const bd = st.byteDialect;
+  const place = (p: PendingFlag, column: ColumnProfile | null): Flag => {
+    const line = lines[p.row - 1] ?? 0;
+    const flag: Flag = {
+      row: p.row, line, column: column ? column.name : null, field: p.field, value: p.value ?? '', rule: p.rule,
+      severity: p.severity, message: p.message,
+    };
+    if (p.score !== undefined) flag.score = p.score;
+    if (p.threshold !== undefined) flag.threshold = p.threshold;
+    if (p.lower !== undefined) flag.lower = p.lower;
+    if (p.upper !== undefined) flag.upper = p.upper;
+    if (p.fix !== undefined) flag.fix = p.fix;
+    if (readRow) {
+      const buf = readRow(p.row);
+      const start = offsets[p.row - 1]!;
+      if (p.field === null) {
+        flag.span = spanOfRecord(buf, start, line, bd);
+        if (p.value === undefined) flag.value = excerpt(new TextDecoder().decode(buf.subarray(0, flag.span.endOffset - start)));
+      } else {
+        const span = spanOfField(buf, start, line, p.field, bd);
+        if (span) {
+          flag.span = span;
+          if (p.value === undefined) flag.value = fieldTextAt(buf, span.startOffset - start, span.endOffset - start, bd.quote);
+        }
+      }
+    }
+    if (p.rule === 'surrounding-whitespace' && flag.fix === undefined && flag.span) flag.fix = flag.value.trim();
+    return flag;
+  };
+
+  for (const { column, flags } of allPending) {
+    if (!column) continue;
+    const { kept, totals } = capFlags(flags, column.name, options.rules.maxFlagsPerRule);
+    column.flags = kept.map((p) => place(p, column));
+    column.flagTotals = totals;
+  }
+  const recordCapped = capFlags(recordPending, null, options.rules.maxFlagsPerRule);
+  const recordFlags = recordCapped.kept.map((p) => place(p, null));
+  const recordFlagTotals: FlagTotal[] = recordCapped.totals;
+  if (records.raggedTotal > records.ragged.length) {
+    const t = recordFlagTotals.find((x) => x.rule === 'ragged-row');
+    if (t) t.total = records.raggedTotal;
+  }
+
+  const scanner = st.scanner;
+  if (scanner.looseQuotes > 0) {
+    st.notices.push({
+      code: 'loose-quotes', severity: 'warning',
+      message: `${scanner.looseQuotes} field${scanner.looseQuotes === 1 ? '' : 's'} break${scanner.looseQuotes === 1 ? 's' : ''} the quoting rules of RFC 4180 (a quote inside an unquoted field, or text after a closing quote) and ${scanner.looseQuotes === 1 ? 'was' : 'were'} read literally.`,
+    });
+  }
+  for (const n of st.headerNotes) {
+    if (n.problem === 'duplicate') st.notices.push({ code: 'duplicate-header', severity: 'warning', message: `Column ${n.field + 1} repeats the header name "${n.original}"; it is called "${n.name}" here.` });
+    if (n.problem === 'empty') st.notices.push({ code: 'empty-header', severity: 'warning', message: `Column ${n.field + 1} has no header name; it is called "${n.name}" here.` });
+  }
+  if (st.partial) {
+    st.notices.push({ code: 'partial', severity: 'information', message: `First pass: only the first ${records.rows} records were read. The exact profile follows.` });
+  }
+
+  const profile: Profile = {
+    schema: 'assay-profile/1',
+    source: st.source.name,
+    rows: records.rows,
+    delimiter: st.dialect.delimiter,
+    quote: st.dialect.quote,
+    header: st.dialect.header,
+    decimalSeparator: st.dialect.decimalSeparator,
+    encoding: st.encoding,
+    bom: st.bom,
+    lineEnding: scanner.lineEnding,
+    bytes: st.bytes,
+    lines: scanner.lines,
+    blankLines: scanner.blankLines,
+    partial: st.partial,
+    ragged: records.ragged,
+    raggedTotal: records.raggedTotal,
+    duplicateRecords,
+    headerNotes: st.headerNotes,
+    notices: st.notices,
+    columns,
+    recordFlags,
+    recordFlagTotals,
+    groups: [],
+    methods: {
+      quantile: `Hyndman & Fan (1996) type ${options.quantileType}`,
+      bins: options.bins.rule,
+      edges: options.edges,
+      missingTokens: [...options.missingTokens],
+    },
+  };
+  return { profile, index: { offsets, lines } };
+}
+
+/** Two records hold the same values (quoting may differ: `"a",b` repeats `a,b`). */
+function sameBytes(a: Uint8Array, b: Uint8Array, st: JobState): boolean {
+  const q = st.byteDialect.quote;
+  for (let field = 0; ; field++) {
+    const sa = spanOfField(a, 0, 1, field, st.byteDialect);
+    const sb = spanOfField(b, 0, 1, field, st.byteDialect);
+    if (!sa || !sb) return !sa && !sb;
+    if (fieldTextAt(a, sa.startOffset, sa.endOffset, q) !== fieldTextAt(b, sb.startOffset, sb.endOffset, q)) return false;
+  }
+}
+
+function excerpt(text: string): string {
+  const oneLine = text.replace(/\r\n|\r|\n/g, ' ');
+  return oneLine.length > 120 ? oneLine.slice(0, 119) + '…' : oneLine;
+}

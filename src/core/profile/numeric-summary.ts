@@ -1,0 +1,89 @@
+// The numeric summaries of one column, from its sorted values: moments, quantiles, robust
+// measures, the histogram and grouped frequency table, and the shape check. Which of them a reader
+// should use depends on the level; the panel and the reports show only those.
+import { binEdges } from '../bins/bin-edges';
+import { groupedTable } from '../bins/grouped-table';
+import { histogramCounts } from '../bins/histogram-counts';
+import type { BinChoice, ProfileOptions } from '../options';
+import { dagostinoPearson } from '../stats/dagostino-pearson';
+import { geometricMean } from '../stats/geometric-mean';
+import { medianAbsoluteDeviation } from '../stats/median-absolute-deviation';
+import { Moments } from '../stats/moments';
+import { quantileSorted } from '../stats/quantile';
+import { shapiroWilk } from '../stats/shapiro-wilk';
+import { trimmedMean } from '../stats/trimmed-mean';
+import type { GroupedTable, Histogram, Level, NumericStats, ShapeCheck, ShapeTest } from './types';
+
+export const SHAPE_CAUTION =
+  'A normality test can only fail to find a departure from the normal shape; a high p-value is not proof that the data are normal, and with many values even a harmless departure gives a low p-value. Look at the histogram too.';
+
+export interface NumericSummary {
+  stats: NumericStats;
+  histogram: Histogram | null;
+  grouped: GroupedTable | null;
+  shape: ShapeCheck | null;
+}
+
+/** Histogram and grouped table of sorted values for a bin choice (also used to re-bin on request). */
+export function binValues(sorted: Float64Array, choice: BinChoice, mode: 'nice' | 'exact'): { histogram: Histogram | null; grouped: GroupedTable | null } {
+  const edges = binEdges(sorted, choice, mode);
+  if (!edges) return { histogram: null, grouped: null };
+  const closedLast = edges.edgeMode === 'exact';
+  const counts = histogramCounts(sorted, edges.edges, closedLast);
+  const histogram: Histogram = { rule: edges.rule, label: edges.label, edgeMode: edges.edgeMode, width: edges.width, edges: edges.edges, counts };
+  return { histogram, grouped: groupedTable(edges.edges, counts, closedLast, edges.rule, edges.label) };
+}
+
+export function numericSummary(sorted: Float64Array, _rowValues: Float64Array, level: Level, options: ProfileOptions): NumericSummary {
+  const n = sorted.length;
+  const m = Moments.of(sorted);
+  const type = options.quantileType;
+  const q1 = quantileSorted(sorted, 0.25, type);
+  const median = quantileSorted(sorted, 0.5, type);
+  const q3 = quantileSorted(sorted, 0.75, type);
+  const min = sorted[0]!;
+  const max = sorted[n - 1]!;
+  const ratio = level === 'ratio';
+  const stats: NumericStats = {
+    count: n,
+    sum: m.total,
+    mean: m.mean,
+    sd: m.sd ?? 0,
+    variance: m.variance ?? 0,
+    sem: m.sem ?? 0,
+    min,
+    max,
+    range: max - min,
+    q1,
+    median,
+    q3,
+    iqr: q3 - q1,
+    mad: medianAbsoluteDeviation(sorted),
+    trimmedMean: trimmedMean(sorted, 0.1),
+    skewness: finiteOrNull(m.skewness),
+    kurtosis: finiteOrNull(m.kurtosis),
+    cv: ratio ? finiteOrNull(m.cv) : null,
+    geometricMean: ratio && min > 0 ? finiteOrNull(geometricMean(sorted)) : null,
+    quantileType: type,
+  };
+  const { histogram, grouped } = binValues(sorted, options.bins, options.edges);
+  let shape: ShapeCheck | null = null;
+  if (level === 'interval' || level === 'ratio') {
+    const tests: ShapeTest[] = [];
+    const skipped: string[] = [];
+    if (n >= 3 && n <= 5000 && max > min) {
+      const sw = shapiroWilk(sorted);
+      if (sw) tests.push({ method: 'shapiro-wilk', statistic: sw.w, p: sw.p, n });
+    } else skipped.push(n < 3 ? 'Shapiro-Wilk needs at least 3 values' : n > 5000 ? 'Shapiro-Wilk (Royston) is defined for up to 5000 values' : 'all values are equal');
+    if (n >= 20 && max > min) {
+      const dp = dagostinoPearson(sorted);
+      if (dp) tests.push({ method: 'dagostino-pearson', statistic: dp.k2, p: dp.p, n });
+    } else skipped.push(n < 20 ? "D'Agostino-Pearson needs at least 20 values" : 'all values are equal');
+    shape = { tests, skipped, caution: SHAPE_CAUTION };
+  }
+  return { stats, histogram, grouped, shape };
+}
+
+function finiteOrNull(x: number | null | undefined): number | null {
+  return x === null || x === undefined || !Number.isFinite(x) ? null : x;
+}
