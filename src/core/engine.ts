@@ -1,7 +1,7 @@
 // The engine's public face: bytes in (in chunks), one Profile out. Shells call only this module
 // (and the pure helpers it re-exports); they never reach into the stages.
-import type { ProfileOptions } from './options';
-import type { Profile } from './profile/types';
+import type { BinChoice, ProfileOptions } from './options';
+import type { GroupComparison, GroupedTable, Histogram, Profile } from './profile/types';
 
 /**
  * Where each data record sits, one entry per row (row r at index r - 1). Kept apart from the JSON
@@ -17,6 +17,15 @@ export interface RecordIndex {
 export interface ProfileResult {
   profile: Profile;
   index: RecordIndex;
+  /** Answers follow-up questions about the same data without reading it again (kept in the worker). */
+  session: ProfileSession;
+}
+
+export interface ProfileSession {
+  /** Histogram and grouped table of a numeric column for another bin choice; null for other columns. */
+  rebin(column: string, bins: BinChoice, edges: 'nice' | 'exact'): { histogram: Histogram | null; grouped: GroupedTable | null } | null;
+  /** Per-group summaries of a numeric column split by a categorical one; null when either does not fit. */
+  compareGroups(numeric: string, by: string): GroupComparison | null;
 }
 
 export interface ProfileJob {

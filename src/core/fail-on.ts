@@ -19,7 +19,7 @@ export function failOnReasons(profile: Profile, gates: readonly FailOn[]): strin
   }
   if (gates.includes('constraints')) {
     const n = total((rule) => rule === 'constraint' || rule === 'duplicate-key');
-    const meta = profile.notices.filter((x) => x.code === 'metadata');
+    const meta = profile.notices.filter((x) => x.code === 'metadata' && x.severity === 'error');
     if (n > 0) reasons.push(`${n} constraint violation${n === 1 ? '' : 's'} found`);
     if (meta.length > 0) reasons.push(`the metadata is invalid (${meta.length} problem${meta.length === 1 ? '' : 's'})`);
   }

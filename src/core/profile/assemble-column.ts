@@ -6,7 +6,7 @@ import {
 import { inferLevel } from '../infer/infer-level';
 import { inferType } from '../infer/infer-type';
 import { checkCalendar, daysFromCivil, isoFromMs } from '../infer/parse-date';
-import type { ProfileOptions } from '../options';
+import type { ProfileOptions, RuleId } from '../options';
 import type { ColumnAccumulator } from './column-accumulator';
 import { columnFlags, type PendingFlag } from './column-flags';
 import { frequencyTable, modes, naturalCompare, type Counted } from './frequency-table';
@@ -20,6 +20,8 @@ export interface ColumnContext {
   /** Declared by metadata (CSV on the Web) or options. */
   declaredType: ColumnType | null;
   declaredLevel: Level | null;
+  /** Declared ordinal order (lowest first). */
+  declaredOrder?: string[] | null;
   missingTokens: readonly string[];
   /** Declared part of the primary key. */
   primaryKey: boolean;
@@ -28,8 +30,12 @@ export interface ColumnContext {
 export interface AssembledColumn {
   column: ColumnProfile;
   pending: PendingFlag[];
+  /** True totals per rule, where a rule capped its own hits. */
+  totals: Map<RuleId, number>;
   /** Row-indexed typed values (NaN = none): numbers, or ms for dates; null for text/boolean. */
   rowValues: Float64Array | null;
+  /** The typed values, sorted ascending. */
+  sorted: Float64Array | null;
 }
 
 export function assembleColumn(acc: ColumnAccumulator, name: string, index: number, ctx: ColumnContext): AssembledColumn {
@@ -127,7 +133,7 @@ export function assembleColumn(acc: ColumnAccumulator, name: string, index: numb
     levelReason = `declared in metadata (inferred: ${levelDecision.level}, ${levelDecision.reason})`;
     levelSource = 'declared';
   }
-  const order = level === 'ordinal' ? levelDecision.order : null;
+  const order = level === 'ordinal' ? ctx.declaredOrder ?? levelDecision.order : null;
 
   const m = modes(entries);
   const discrete = !numeric || distinct <= 20;
@@ -152,6 +158,7 @@ export function assembleColumn(acc: ColumnAccumulator, name: string, index: numb
     shape: null,
     flags: [],
     flagTotals: [],
+    skippedRules: [],
   };
 
   if (numeric && sorted && sorted.length > 0) {
@@ -171,10 +178,11 @@ export function assembleColumn(acc: ColumnAccumulator, name: string, index: numb
     column.stats = stats;
   }
 
-  const pending = columnFlags({
+  const outcome = columnFlags({
     acc, column, ctx, rowValues, invalidRows, impossibleRows, entries,
   });
-  return { column, pending, rowValues };
+  column.skippedRules = outcome.skipped;
+  return { column, pending: outcome.pending, totals: outcome.totals, rowValues, sorted };
 }
 
 function missingTokenCounts(acc: ColumnAccumulator, tokens: readonly string[]): { token: string; count: number }[] {

@@ -1,12 +1,16 @@
 // Assembles the Profile once the input has ended: every column, the record-level findings, and the
 // exact position of each kept flag (read back from the record's bytes).
-import type { ProfileResult } from '../engine';
+import type { ProfileResult, ProfileSession } from '../engine';
+import type { RuleId } from '../options';
 import { spanOfField, spanOfRecord } from '../read/cell-span';
 import { assembleColumn } from './assemble-column';
 import { capFlags, type PendingFlag } from './column-flags';
+import { declaredColumn } from './declared-schema';
 import { fieldTextAt } from './field-text';
-import type { JobState } from './job';
-import type { ColumnProfile, Flag, FlagTotal, Profile } from './types';
+import type { JobState, ScanTotals } from './job';
+import { compareGroups } from './group-comparison';
+import { binValues } from './numeric-summary';
+import type { ColumnProfile, Flag, FlagTotal, GroupComparison, LineEnding, Profile } from './types';
 
 /** Bytes read back for a record whose end is not known (the last one): enough for any sane record. */
 const TAIL_READ = 1 << 20;
@@ -22,18 +26,27 @@ export function assembleProfile(st: JobState, read: ((offset: number, length: nu
   const readRow = read ? (row: number) => read(offsets[row - 1]!, recordLength(row)) : null;
 
   const columns: ColumnProfile[] = [];
-  const allPending: { column: ColumnProfile | null; flags: PendingFlag[] }[] = [];
+  const typed = new Map<string, { sorted: Float64Array; rowValues: Float64Array }>();
+  const allPending: { column: ColumnProfile | null; flags: PendingFlag[]; totals: Map<RuleId, number> }[] = [];
   st.columns.forEach((acc, i) => {
     const name = st.names[i]!;
-    const { column, pending } = assembleColumn(acc, name, i, {
+    const dc = declaredColumn(st.declared, i);
+    const { column, pending, totals, rowValues, sorted } = assembleColumn(acc, name, i, {
       options,
-      declaredType: options.types[name] ?? null,
-      declaredLevel: null,
-      missingTokens: options.missingTokens,
-      primaryKey: false,
+      declaredType: options.types[name] ?? dc?.type ?? null,
+      declaredLevel: dc?.level ?? (dc?.order ? 'ordinal' : null),
+      declaredOrder: dc?.order ?? null,
+      missingTokens: dc ? dc.nullTokens : options.missingTokens,
+      primaryKey: !!dc?.isPrimaryKeyPart && st.declared!.primaryKey.length === 1,
     });
+    if (st.declared && options.rules.enabled.has('constraint')) {
+      pending.push(...st.declared.flags.filter((f) => f.field === i));
+      const t = st.declared.totals.get(i);
+      if (t) totals.set('constraint', t);
+    }
     columns.push(column);
-    allPending.push({ column, flags: pending });
+    allPending.push({ column, flags: pending, totals });
+    if (rowValues && sorted && (column.type === 'integer' || column.type === 'decimal')) typed.set(name, { sorted, rowValues });
   });
 
   // Record-level findings.
@@ -46,6 +59,7 @@ export function assembleProfile(st: JobState, read: ((offset: number, length: nu
       });
     }
   }
+  if (st.declared && options.rules.enabled.has('constraint')) recordPending.push(...st.declared.keyFlags);
   let duplicateRecords = records.duplicateTotal;
   if (options.rules.enabled.has('duplicate-record')) {
     for (const d of records.duplicates) {
@@ -87,16 +101,18 @@ export function assembleProfile(st: JobState, read: ((offset: number, length: nu
       }
     }
     if (p.rule === 'surrounding-whitespace' && flag.fix === undefined && flag.span) flag.fix = flag.value.trim();
+    // Messages written before the cell's text was read name it by a placeholder.
+    if (flag.message.includes('{value}')) flag.message = flag.message.replace('{value}', flag.span ? JSON.stringify(excerpt(flag.value)) : 'The cell');
     return flag;
   };
 
-  for (const { column, flags } of allPending) {
+  for (const { column, flags, totals: known } of allPending) {
     if (!column) continue;
-    const { kept, totals } = capFlags(flags, column.name, options.rules.maxFlagsPerRule);
+    const { kept, totals } = capFlags(flags, column.name, options.rules.maxFlagsPerRule, known);
     column.flags = kept.map((p) => place(p, column));
     column.flagTotals = totals;
   }
-  const recordCapped = capFlags(recordPending, null, options.rules.maxFlagsPerRule);
+  const recordCapped = capFlags(recordPending, null, options.rules.maxFlagsPerRule, st.declared ? new Map([['constraint', st.declared.keyTotal]]) : undefined);
   const recordFlags = recordCapped.kept.map((p) => place(p, null));
   const recordFlagTotals: FlagTotal[] = recordCapped.totals;
   if (records.raggedTotal > records.ragged.length) {
@@ -104,7 +120,7 @@ export function assembleProfile(st: JobState, read: ((offset: number, length: nu
     if (t) t.total = records.raggedTotal;
   }
 
-  const scanner = st.scanner;
+  const scanner = st.scan;
   if (scanner.looseQuotes > 0) {
     st.notices.push({
       code: 'loose-quotes', severity: 'warning',
@@ -119,6 +135,31 @@ export function assembleProfile(st: JobState, read: ((offset: number, length: nu
     st.notices.push({ code: 'partial', severity: 'information', message: `First pass: only the first ${records.rows} records were read. The exact profile follows.` });
   }
 
+  const session: ProfileSession = {
+    rebin(column, bins, edges) {
+      const t = typed.get(column);
+      return t ? binValues(t.sorted, bins, edges) : null;
+    },
+    compareGroups(numeric, by) {
+      const t = typed.get(numeric);
+      const i = st.names.indexOf(by);
+      const acc = i >= 0 ? st.columns[i] : undefined;
+      if (!t || !acc || !acc.codes || numeric === by) return null;
+      return compareGroups(numeric, by, t.rowValues, acc.codes.view(), [...acc.categories.keys()], options.quantileType);
+    },
+  };
+  const groups: GroupComparison[] = [];
+  for (const by of options.groupBy) {
+    if (!st.names.includes(by)) {
+      st.notices.push({ code: 'group-by', severity: 'warning', message: `--group-by: there is no column "${by}"; columns are ${st.names.map((n) => `"${n}"`).join(', ')}.` });
+      continue;
+    }
+    for (const name of typed.keys()) {
+      const g = name === by ? null : session.compareGroups(name, by);
+      if (g) groups.push(g);
+    }
+  }
+
   const profile: Profile = {
     schema: 'assay-profile/1',
     source: st.source.name,
@@ -129,9 +170,9 @@ export function assembleProfile(st: JobState, read: ((offset: number, length: nu
     decimalSeparator: st.dialect.decimalSeparator,
     encoding: st.encoding,
     bom: st.bom,
-    lineEnding: scanner.lineEnding,
+    lineEnding: lineEndingOf(scanner),
     bytes: st.bytes,
-    lines: scanner.lines,
+    lines: scanner.lineBreaks + (scanner.openLastLine ? 1 : 0),
     blankLines: scanner.blankLines,
     partial: st.partial,
     ragged: records.ragged,
@@ -142,7 +183,7 @@ export function assembleProfile(st: JobState, read: ((offset: number, length: nu
     columns,
     recordFlags,
     recordFlagTotals,
-    groups: [],
+    groups,
     methods: {
       quantile: `Hyndman & Fan (1996) type ${options.quantileType}`,
       bins: options.bins.rule,
@@ -150,7 +191,7 @@ export function assembleProfile(st: JobState, read: ((offset: number, length: nu
       missingTokens: [...options.missingTokens],
     },
   };
-  return { profile, index: { offsets, lines } };
+  return { profile, index: { offsets, lines }, session };
 }
 
 /** Two records hold the same values (quoting may differ: `"a",b` repeats `a,b`). */
@@ -162,6 +203,13 @@ function sameBytes(a: Uint8Array, b: Uint8Array, st: JobState): boolean {
     if (!sa || !sb) return !sa && !sb;
     if (fieldTextAt(a, sa.startOffset, sa.endOffset, q) !== fieldTextAt(b, sb.startOffset, sb.endOffset, q)) return false;
   }
+}
+
+function lineEndingOf(s: ScanTotals): LineEnding {
+  const kinds = (s.lf > 0 ? 1 : 0) + (s.crlf > 0 ? 1 : 0) + (s.cr > 0 ? 1 : 0);
+  if (kinds === 0) return 'none';
+  if (kinds > 1) return 'mixed';
+  return s.lf > 0 ? 'LF' : s.crlf > 0 ? 'CRLF' : 'CR';
 }
 
 function excerpt(text: string): string {

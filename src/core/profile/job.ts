@@ -12,6 +12,7 @@ import { createUtf8Transcoder, type Utf8Transcoder } from '../read/utf8-transcod
 import { assembleProfile } from './assemble-profile';
 import { ColumnAccumulator, GrowableFloat64 } from './column-accumulator';
 import { hashString } from './hyper-log-log';
+import { checkRecord, compileDeclared, declaredColumn, loadDeclared, type DeclaredSchema } from './declared-schema';
 import type { EncodingName, HeaderNote, Notice, RaggedRow } from './types';
 
 /** Bytes looked at before deciding the encoding and the dialect. */
@@ -47,74 +48,130 @@ export interface JobState {
   notices: Notice[];
   columns: ColumnAccumulator[];
   records: RecordState;
-  scanner: RecordScanner;
+  scan: ScanTotals;
   bytes: number;
   partial: boolean;
+  declared: DeclaredSchema | null;
 }
 
-export function createProfileJob(options: ProfileOptions, source: JobSource = { name: null }): ProfileJob {
-  let head: Uint8Array[] = [];
-  let headLength = 0;
-  let bytesRead = 0;
-  let state: JobState | null = null;
-  let transcoder: Utf8Transcoder | null = null;
-  let binary: string | null = null;
-  let full = false;
-  let finished = false;
-  /** Transcoded text kept for non-UTF-8 input, so that flagged cells can still be placed. */
-  let kept: GrowableBytesList | null = null;
-  let headerPending = true;
-  const notices: Notice[] = [];
+/** What the scanner counted, copied out so that the states of several ranges can be merged. */
+export interface ScanTotals {
+  /** Line breaks (inside quotes too). */
+  lineBreaks: number;
+  /** The range ends in a line that has no line break. */
+  openLastLine: boolean;
+  blankLines: number;
+  looseQuotes: number;
+  lf: number;
+  crlf: number;
+  cr: number;
+}
 
-  const start = (): void => {
-    const first = concat(head, headLength);
-    head = [];
-    const guess = detectEncoding(first.subarray(0, HEAD_BYTES), options.encoding);
-    if (guess.kind === 'binary') {
-      binary = guess.reason;
-      return;
+/** How to read one byte range of the UTF-8 text: everything the head of the file decided. */
+export interface RangePlan {
+  options: ProfileOptions;
+  source: JobSource;
+  encoding: EncodingName;
+  bomLength: number;
+  dialect: Dialect;
+  /** Column names, known for every range but the first; null: the first record names them (or names are made). */
+  names: string[] | null;
+  /** Absolute byte offset of the range's first byte in the UTF-8 text. */
+  startOffset: number;
+  /** What CSV on the Web metadata declares, if any. */
+  declared: DeclaredSchema | null;
+}
+
+/**
+ * Reads the records of one byte range of the UTF-8 text into column accumulators. A whole file is
+ * one range; parallel workers each read one, and `mergeStates` joins their states in order.
+ * Rows and lines are counted from the range's start and shifted when states are merged.
+ */
+export class RangeJob {
+  readonly state: JobState;
+  full = false;
+  private headerPending: boolean;
+  private skip: number;
+  private readonly cells: (string | null)[] = [];
+  private readonly scanner: RecordScanner;
+
+  constructor(plan: RangePlan) {
+    const bd = byteDialect({ delimiter: plan.dialect.delimiter, quote: plan.dialect.quote });
+    const options = plan.options;
+    this.scanner = new RecordScanner(bd, (r) => this.onRecord(r), { startOffset: plan.startOffset });
+    this.headerPending = plan.names === null;
+    this.state = {
+      options, source: plan.source, encoding: plan.encoding, bom: plan.bomLength > 0, bomLength: plan.bomLength,
+      dialect: plan.dialect, byteDialect: bd, names: [], headerNotes: [], notices: [], columns: [],
+      records: {
+        rows: 0, offsets: new GrowableFloat64(), lines: new GrowableFloat64(), seen: new Map(), duplicates: [],
+        duplicateTotal: 0, ragged: [], raggedTotal: 0,
+      },
+      scan: { lineBreaks: 0, openLastLine: false, blankLines: 0, looseQuotes: 0, lf: 0, crlf: 0, cr: 0 },
+      bytes: 0, partial: false, declared: plan.declared,
+    };
+    this.skip = plan.names === null ? plan.declared?.skipRecords ?? 0 : 0;
+    if (plan.names) {
+      this.setColumns(plan.names);
+      this.scanner.keepBlankLines = plan.names.length === 1;
     }
-    transcoder = createUtf8Transcoder(guess.encoding, guess.bomLength);
-    const utf8 = transcoder.push(first);
-    const sample = new TextDecoder().decode(utf8.subarray(0, HEAD_BYTES));
-    const dialect = sniffDialect(sample, {
-      delimiter: options.delimiter, quote: options.quote, header: options.header, decimalSeparator: options.decimalSeparator,
+  }
+
+  private setColumns(names: string[]): void {
+    const st = this.state;
+    st.names = names;
+    const shared = new CellClassifier(st.options.missingTokens, st.dialect.decimalSeparator);
+    st.columns = names.map((_, i) => {
+      const declared = declaredColumn(st.declared, i);
+      const classifier = declared ? new CellClassifier(declared.nullTokens, st.dialect.decimalSeparator) : shared;
+      return new ColumnAccumulator(classifier, { maxDistinct: st.options.maxDistinct });
     });
-    const bd = byteDialect({ delimiter: dialect.delimiter, quote: dialect.quote });
-    if (guess.encoding !== 'utf-8') kept = new GrowableBytesList();
-    const records: RecordState = {
-      rows: 0, offsets: new GrowableFloat64(), lines: new GrowableFloat64(), seen: new Map(), duplicates: [],
-      duplicateTotal: 0, ragged: [], raggedTotal: 0,
-    };
-    const st: JobState = {
-      options, source, encoding: guess.encoding, bom: guess.bomLength > 0, bomLength: guess.bomLength, dialect,
-      byteDialect: bd, names: [], headerNotes: [], notices, columns: [], records, bytes: 0, partial: false,
-      scanner: new RecordScanner(bd, (r) => onRecord(r)),
-    };
-    state = st;
-    feed(utf8);
-  };
+  }
 
-  const classifierFor = (st: JobState) => new CellClassifier(st.options.missingTokens, st.dialect.decimalSeparator);
+  push(utf8: Uint8Array): void {
+    if (this.full || utf8.length === 0) return;
+    this.state.bytes += utf8.length;
+    this.scanner.push(utf8);
+  }
 
-  const onRecord = (r: RecordView): void => {
-    const st = state!;
-    if (full) return;
+  /** Ends the range and copies the scanner's totals into the state. */
+  end(): JobState {
+    const sc = this.scanner;
+    if (!this.full) sc.end();
+    const st = this.state;
+    st.scan = {
+      lineBreaks: sc.lineBreaks, openLastLine: sc.lines > sc.lineBreaks, blankLines: sc.blankLines,
+      looseQuotes: sc.looseQuotes, lf: sc.lf, crlf: sc.crlf, cr: sc.cr,
+    };
+    if (this.headerPending) {
+      st.notices.push({ code: 'empty', severity: 'warning', message: 'The file holds no records.' });
+    }
+    return st;
+  }
+
+  private onRecord(r: RecordView): void {
+    const st = this.state;
+    const options = st.options;
+    if (this.full) return;
     if (r.unterminated) {
-      notices.push({
+      st.notices.push({
         code: 'unterminated-quote', severity: 'error', line: r.quoteLine,
         message: `A quote opened on line ${r.quoteLine} is never closed, so the rest of the file (from line ${r.line}) reads as one record. Check that line for a missing closing quote.`,
       });
     }
-    if (headerPending) {
-      headerPending = false;
+    if (this.skip > 0) {
+      this.skip--;
+      return;
+    }
+    if (this.headerPending) {
+      this.headerPending = false;
       const raw: string[] = [];
       for (let i = 0; i < r.fieldCount; i++) raw.push(r.text(i));
+      if (st.declared) compileDeclared(st.declared, st.dialect.header ? raw : null, st.notices);
       const { names, notes } = uniqueNames(st.dialect.header ? raw : raw.map(() => ''), st.dialect.header);
-      st.names = names;
       st.headerNotes = notes;
-      const classifier = classifierFor(st);
-      st.columns = names.map(() => new ColumnAccumulator(classifier, { maxDistinct: options.maxDistinct }));
+      this.setColumns(names);
+      this.scanner.keepBlankLines = names.length === 1;
       if (st.dialect.header) return;
     }
     const rec = st.records;
@@ -129,16 +186,20 @@ export function createProfileJob(options: ProfileOptions, source: JobSource = { 
     }
     let h1 = 0x9e3779b9 ^ r.fieldCount;
     let h2 = 0x85ebca6b;
+    const declared = st.declared?.columns ? st.declared : null;
+    if (declared) this.cells.length = 0;
     for (let i = 0; i < width; i++) {
       const text = i < r.fieldCount ? r.text(i) : null;
       st.columns[i]!.add(text);
+      if (declared) this.cells.push(text);
       const h = text === null ? 0x27d4eb2f : hashString(text);
       h1 = Math.imul(h1 ^ h, 0x01000193) >>> 0;
       h2 = (Math.imul(h2, 31) + h) >>> 0;
     }
     for (let i = width; i < r.fieldCount; i++) h1 = Math.imul(h1 ^ hashString(r.text(i)), 0x01000193) >>> 0;
+    if (declared) checkRecord(declared, row, this.cells, options.rules.maxFlagsPerRule);
     // 52 bits of two independent mixes: a false match among 10 million records is very unlikely,
-    // and candidates are confirmed on the bytes before they are reported.
+    // and candidates are confirmed on the values before they are reported.
     const key = (h1 >>> 0) * 0x100000 + (h2 & 0xfffff);
     const first = rec.seen.get(key);
     if (first === undefined) rec.seen.set(key, row);
@@ -147,26 +208,68 @@ export function createProfileJob(options: ProfileOptions, source: JobSource = { 
       if (rec.duplicates.length < options.rules.maxFlagsPerRule * 4) rec.duplicates.push({ row, first });
     }
     if (options.maxRecords !== null && row >= options.maxRecords) {
-      full = true;
+      this.full = true;
       st.partial = true;
     }
+  }
+}
+
+/** Reads the head of the input to decide the encoding and dialect, then streams it all through one range. */
+export function createProfileJob(options: ProfileOptions, source: JobSource = { name: null }): ProfileJob {
+  let head: Uint8Array[] = [];
+  let headLength = 0;
+  let bytesRead = 0;
+  let range: RangeJob | null = null;
+  let transcoder: Utf8Transcoder | null = null;
+  let binary: string | null = null;
+  let finished = false;
+  /** Transcoded text kept for non-UTF-8 input, so that flagged cells can still be placed. */
+  let kept: GrowableBytesList | null = null;
+  let keptDropped = false;
+
+  let declared: DeclaredSchema | null = null;
+  let metaNotices: Notice[] = [];
+  if (source.metadata) {
+    const loaded = loadDeclared(source.metadata.text, source.metadata.location, options);
+    declared = loaded.schema;
+    options = loaded.options;
+    metaNotices = loaded.notices;
+  }
+  const start = (): void => {
+    const first = concat(head, headLength);
+    head = [];
+    const guess = detectEncoding(first.subarray(0, HEAD_BYTES), options.encoding);
+    if (guess.kind === 'binary') {
+      binary = guess.reason;
+      return;
+    }
+    transcoder = createUtf8Transcoder(guess.encoding, guess.bomLength);
+    const utf8 = transcoder.push(first);
+    const dialect = planDialect(utf8, options);
+    if (guess.encoding !== 'utf-8') kept = new GrowableBytesList();
+    range = new RangeJob({ options, source, encoding: guess.encoding, bomLength: guess.bomLength, dialect, names: null, startOffset: 0, declared });
+    range.state.notices.push(...metaNotices);
+    feed(utf8);
   };
 
   const feed = (utf8: Uint8Array): void => {
-    const st = state!;
-    if (utf8.length === 0) return;
-    kept?.push(utf8);
-    if (kept && kept.length > MAX_KEPT_TRANSCODED) kept = null;
-    st.bytes += utf8.length;
-    st.scanner.push(utf8);
+    if (utf8.length === 0 || !range) return;
+    if (kept) {
+      kept.push(utf8);
+      if (kept.length > MAX_KEPT_TRANSCODED) {
+        kept = null;
+        keptDropped = true;
+      }
+    }
+    range.push(utf8);
   };
 
   return {
     push(chunk: Uint8Array) {
       if (finished) throw new Error('push: the job has finished');
-      if (full || binary !== null) return;
+      if (range?.full || binary !== null) return;
       bytesRead += chunk.length;
-      if (state === null) {
+      if (range === null) {
         head.push(chunk);
         headLength += chunk.length;
         if (headLength >= HEAD_BYTES) start();
@@ -178,32 +281,34 @@ export function createProfileJob(options: ProfileOptions, source: JobSource = { 
       return bytesRead;
     },
     get full() {
-      return full;
+      return range?.full ?? false;
     },
     finish(readRecord) {
       if (finished) throw new Error('finish: the job has finished');
       finished = true;
-      if (state === null && binary === null) start();
-      if (binary !== null || state === null) return notDelimited(binary ?? 'empty input', source, bytesRead, options);
-      const st: JobState = state;
-      if (!full) {
-        feed(transcoder!.end());
-        st.scanner.end();
-      }
-      if (headerPending) {
-        // Nothing at all, or only blank lines.
-        notices.push({ code: 'empty', severity: 'warning', message: 'The file holds no records.' });
-      }
+      if (range === null && binary === null) start();
+      if (binary !== null || range === null) return notDelimited(binary ?? 'empty input', source, bytesRead, options);
+      const r: RangeJob = range;
+      if (!r.full) feed(transcoder!.end());
+      const st = r.end();
       const keptBytes = kept ? kept.concat() : null;
       let read: ((offset: number, length: number) => Uint8Array) | null = null;
       if (keptBytes) read = (offset, length) => keptBytes.subarray(offset, offset + length);
       else if (readRecord && st.encoding === 'utf-8') read = (offset, length) => readRecord(offset + st.bomLength, length);
-      else if (st.encoding !== 'utf-8') {
-        notices.push({ code: 'no-positions', severity: 'information', message: 'The file is too large to keep its re-encoded text, so flagged cells are listed by row without exact positions.' });
+      if (keptDropped) {
+        st.notices.push({ code: 'no-positions', severity: 'information', message: 'The file is too large to keep its re-encoded text, so flagged cells are listed by row without exact positions.' });
       }
       return assembleProfile(st, read);
     },
   };
+}
+
+/** Sniffs the dialect from the start of the UTF-8 text (the options' choices win). */
+export function planDialect(utf8Head: Uint8Array, options: ProfileOptions): Dialect {
+  const sample = new TextDecoder().decode(utf8Head.subarray(0, HEAD_BYTES));
+  return sniffDialect(sample, {
+    delimiter: options.delimiter, quote: options.quote, header: options.header, decimalSeparator: options.decimalSeparator,
+  });
 }
 
 /** Makes header names usable as keys: empty names become `column N`, repeats get ` (2)`, ` (3)`. */
@@ -270,6 +375,7 @@ function notDelimited(reason: string, source: JobSource, bytes: number, options:
       methods: { quantile: `Hyndman & Fan type ${options.quantileType}`, bins: options.bins.rule, edges: options.edges, missingTokens: [...options.missingTokens] },
     },
     index: { offsets: new Float64Array(0), lines: new Float64Array(0) },
+    session: { rebin: () => null, compareGroups: () => null },
   };
 }
 

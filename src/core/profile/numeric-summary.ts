@@ -38,9 +38,9 @@ export function numericSummary(sorted: Float64Array, _rowValues: Float64Array, l
   const n = sorted.length;
   const m = Moments.of(sorted);
   const type = options.quantileType;
-  const q1 = quantileSorted(sorted, 0.25, type);
-  const median = quantileSorted(sorted, 0.5, type);
-  const q3 = quantileSorted(sorted, 0.75, type);
+  const q1 = (quantileSorted(sorted, 0.25, type) ?? NaN);
+  const median = (quantileSorted(sorted, 0.5, type) ?? NaN);
+  const q3 = (quantileSorted(sorted, 0.75, type) ?? NaN);
   const min = sorted[0]!;
   const max = sorted[n - 1]!;
   const ratio = level === 'ratio';
@@ -58,8 +58,8 @@ export function numericSummary(sorted: Float64Array, _rowValues: Float64Array, l
     median,
     q3,
     iqr: q3 - q1,
-    mad: medianAbsoluteDeviation(sorted),
-    trimmedMean: trimmedMean(sorted, 0.1),
+    mad: medianAbsoluteDeviation(sorted) ?? NaN,
+    trimmedMean: trimmedMean(sorted, 0.1) ?? NaN,
     skewness: finiteOrNull(m.skewness),
     kurtosis: finiteOrNull(m.kurtosis),
     cv: ratio ? finiteOrNull(m.cv) : null,

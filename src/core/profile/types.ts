@@ -217,6 +217,8 @@ export interface ColumnProfile {
   shape: ShapeCheck | null;
   flags: Flag[];
   flagTotals: FlagTotal[];
+  /** Rules that did not run on this column, and why (e.g. modified z when the MAD is 0). */
+  skippedRules: { rule: string; reason: string }[];
 }
 
 export interface GroupSummary {

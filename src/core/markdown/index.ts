@@ -1,0 +1,20 @@
+// Markdown tables and the Markdown report: pure functions from profile parts to strings.
+export { escapeCell, escapeInline, type EscapeOptions } from './escape-cell';
+export { revealInvisibles, DEFAULT_MAX_TEXT_LENGTH, LINE_BREAK_MARK, EDGE_SPACE_MARK, ELLIPSIS, type RevealOptions } from './reveal-invisibles';
+export { formatNumber, checkSignificantDigits, NO_NUMBER, DEFAULT_SIGNIFICANT_DIGITS } from './format-number';
+export { formatEdges } from './format-edges';
+export { markdownTable, markdownCell, type MarkdownTableOptions } from './markdown-table';
+export { markdownCaption, renderTableSpec } from './render-table-spec';
+export { label, tableContext, type Align, type Cell, type LabelCell, type CaptionSpec, type TableSpec, type TableContext, type TableOptions } from './table-spec';
+export { centreSpread, CENTRE_SPREAD_RULE, type CentreSpread } from './centre-spread';
+export { ordinalQuartiles, type OrdinalQuartiles } from './ordinal-quartiles';
+export { summaryTable, summaryTableSpec, flagCount } from './summary-table';
+export { columnSummary, columnSummarySpec } from './column-summary';
+export { frequencyTable, frequencyTableSpec } from './frequency-table';
+export { groupedTable, groupedTableSpec, intervalText } from './grouped-table';
+export { groupComparison, groupComparisonSpec } from './group-comparison';
+export { flagsTable, flagsTableSpec, flagLocation, type FlagsTableOptions } from './flags-table';
+export { fileFactsSpec, describeCharacter } from './file-facts';
+export { methodNotes, cautions, type MethodNote } from './methods-section';
+export { buildReportModel, MAX_BARS, type ReportOptions, type ReportModel, type ReportSection, type ReportBlock, type ChartSpec, type TextItem } from './report-model';
+export { renderReport } from './report';

@@ -1,0 +1,56 @@
+// Joins the states of consecutive byte ranges (read by parallel workers) into the state one pass
+// over the whole text would have built: rows and lines shift by what came before, accumulators
+// concatenate, dictionaries and counts add, and records repeated across ranges become duplicates.
+import type { JobState } from './job';
+
+/** Merges `b` (the range right after `a`) into `a`, and returns `a`. */
+export function mergeStates(a: JobState, b: JobState): JobState {
+  if (a.columns.length !== b.columns.length) {
+    throw new Error(`merge: ranges have ${a.columns.length} and ${b.columns.length} columns`);
+  }
+  const rowShift = a.records.rows;
+  const lineShift = a.scan.lineBreaks;
+  a.columns.forEach((acc, i) => acc.append(b.columns[i]!));
+  const ra = a.records;
+  const rb = b.records;
+  const bo = rb.offsets.view();
+  const bl = rb.lines.view();
+  for (let i = 0; i < bo.length; i++) {
+    ra.offsets.push(bo[i]!);
+    ra.lines.push(bl[i]! + lineShift);
+  }
+  for (const g of rb.ragged) {
+    if (ra.ragged.length < 1000) ra.ragged.push({ ...g, row: g.row + rowShift, line: g.line + lineShift });
+  }
+  ra.raggedTotal += rb.raggedTotal;
+  // Keys first seen in b may have been seen in a already: those records repeat a's.
+  const firstOf = new Map<number, number>();
+  for (const [key, row] of rb.seen) {
+    const earlier = ra.seen.get(key);
+    if (earlier === undefined) {
+      ra.seen.set(key, row + rowShift);
+      firstOf.set(row, row + rowShift);
+    } else {
+      ra.duplicateTotal++;
+      ra.duplicates.push({ row: row + rowShift, first: earlier });
+      firstOf.set(row, earlier);
+    }
+  }
+  for (const d of rb.duplicates) ra.duplicates.push({ row: d.row + rowShift, first: firstOf.get(d.first) ?? d.first + rowShift });
+  ra.duplicates.sort((x, y) => x.row - y.row);
+  ra.duplicateTotal += rb.duplicateTotal;
+  ra.rows += rb.rows;
+  a.scan = {
+    lineBreaks: a.scan.lineBreaks + b.scan.lineBreaks,
+    openLastLine: b.scan.openLastLine || (b.bytes === 0 && a.scan.openLastLine),
+    blankLines: a.scan.blankLines + b.scan.blankLines,
+    looseQuotes: a.scan.looseQuotes + b.scan.looseQuotes,
+    lf: a.scan.lf + b.scan.lf,
+    crlf: a.scan.crlf + b.scan.crlf,
+    cr: a.scan.cr + b.scan.cr,
+  };
+  for (const n of b.notices) a.notices.push(n.line !== undefined ? { ...n, line: n.line + lineShift } : n);
+  a.bytes += b.bytes;
+  a.partial = a.partial || b.partial;
+  return a;
+}

@@ -1,0 +1,134 @@
+import { readdirSync, readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { createProfileJob, profileBytes, profileText } from '../../../../src/core/engine';
+import { resolveOptions } from '../../../../src/core/options';
+import type { ColumnProfile, NumericStats, Profile } from '../../../../src/core/profile/types';
+
+const options = resolveOptions();
+const col = (p: Profile, name: string): ColumnProfile => {
+  const c = p.columns.find((x) => x.name === name);
+  if (!c) throw new Error(`no column ${name}`);
+  return c;
+};
+const num = (c: ColumnProfile): NumericStats => c.stats as NumericStats;
+
+// csv-spectrum (npm package, BSD-2-Clause): each CSV with the records its JSON file expects.
+describe('counting records of the csv-spectrum suite', () => {
+  const dir = join(__dirname, '../../../../node_modules/csv-spectrum');
+  for (const file of readdirSync(join(dir, 'csvs'))) {
+    it(file, () => {
+      const parsed = JSON.parse(readFileSync(join(dir, 'json', file.replace(/\.csv$/, '.json')), 'utf8')) as Record<string, string>[] | Record<string, string>;
+      // One case's JSON is a lone object rather than a list of one.
+      const expected = Array.isArray(parsed) ? parsed : [parsed];
+      const { profile } = profileBytes(new Uint8Array(readFileSync(join(dir, 'csvs', file))), resolveOptions({ header: true }));
+      expect(profile.rows).toBe(expected.length);
+      if (expected.length > 0) expect(profile.columns.map((c) => c.name)).toEqual(Object.keys(expected[0]!));
+      expect(profile.raggedTotal).toBe(0);
+      // Every profile is plain JSON (project rule: no NaN, no typed arrays, no undefined in arrays).
+      expect(JSON.parse(JSON.stringify(profile))).toEqual(profile);
+    });
+  }
+});
+
+// Hand-checkable inputs: the expected counts follow from RFC 4180 §2 by reading the text.
+describe('records, lines and malformed input', () => {
+  it('places records after a quoted line break on the right line', () => {
+    const text = 'id,note,value\n1,"two\nlines",5\n2,plain,abc\n3,"x",7\n';
+    const { profile } = profileText(text, options);
+    expect(profile.rows).toBe(3);
+    expect(profile.lines).toBe(5);
+    const flag = col(profile, 'value').flags.find((f) => f.rule === 'not-a-number');
+    expect(flag).toMatchObject({ row: 2, line: 4, value: 'abc', field: 2 });
+    expect(flag?.span).toMatchObject({ startLine: 4, startColumn: 9, endLine: 4, endColumn: 12 });
+  });
+
+  it('reports ragged rows and counts the missing fields as missing', () => {
+    const { profile } = profileText('a,b,c\n1,2,3\n4,5\n6,7,8,9\n', options);
+    expect(profile.rows).toBe(3);
+    expect(profile.ragged).toEqual([
+      { row: 2, line: 3, fields: 2, expected: 3 },
+      { row: 3, line: 4, fields: 4, expected: 3 },
+    ]);
+    expect(col(profile, 'c').missing).toBe(1);
+    expect(profile.recordFlags.filter((f) => f.rule === 'ragged-row').map((f) => f.row)).toEqual([2, 3]);
+  });
+
+  it('names the line where an unterminated quote opened', () => {
+    const { profile } = profileText('a,b\n1,2\n3,"oops\n4,5\n', options);
+    const n = profile.notices.find((x) => x.code === 'unterminated-quote');
+    expect(n?.line).toBe(3);
+  });
+
+  it('skips and counts blank lines, strips a BOM, reads CRLF', () => {
+    const bytes = new Uint8Array([0xef, 0xbb, 0xbf, ...new TextEncoder().encode('name,x\r\n\r\nA,1\r\nB,2\r\n')]);
+    const { profile } = profileBytes(bytes, options);
+    expect(profile.bom).toBe(true);
+    expect(profile.columns[0]!.name).toBe('name');
+    expect(profile.rows).toBe(2);
+    expect(profile.blankLines).toBe(1);
+    expect(profile.lineEnding).toBe('CRLF');
+  });
+
+  it('makes empty and repeated header names unique and says so', () => {
+    const { profile } = profileText('x,,x\n1,2,3\n', options);
+    expect(profile.columns.map((c) => c.name)).toEqual(['x', 'column 2', 'x (2)']);
+    expect(profile.headerNotes.map((n) => n.problem)).toEqual(['empty', 'duplicate']);
+  });
+
+  it('refuses binary content in plain words', () => {
+    const gzip = new Uint8Array([0x1f, 0x8b, 8, 0, 0, 0, 0, 0, 0, 3, 1, 2, 3]);
+    const { profile } = profileBytes(gzip, options);
+    expect(profile.notices[0]?.code).toBe('not-delimited-text');
+    expect(profile.notices[0]?.message).toContain('gzip');
+    expect(profile.columns).toEqual([]);
+  });
+
+  it('gives the same profile whatever the chunking', () => {
+    const text = 'k,v,w\n' + Array.from({ length: 300 }, (_, i) => `${i},"a${i % 7},b",${(i * 37) % 101}`).join('\r\n');
+    const one = profileText(text, options).profile;
+    const bytes = new TextEncoder().encode(text);
+    const job = createProfileJob(options, { name: null });
+    for (let i = 0; i < bytes.length; i += 7) job.push(bytes.subarray(i, i + 7));
+    const chunked = job.finish((o, l) => bytes.subarray(o, o + l)).profile;
+    expect(chunked).toEqual(one);
+  });
+
+  it('counts exact duplicate records, ignoring quoting', () => {
+    const { profile } = profileText('a,b\n1,x\n2,y\n"1",x\n', options);
+    expect(profile.duplicateRecords).toBe(1);
+    expect(profile.recordFlags.find((f) => f.rule === 'duplicate-record')?.row).toBe(3);
+  });
+});
+
+describe('types, levels and missing values', () => {
+  it('counts each missing token', () => {
+    const { profile } = profileText('v\n1\nNA\n\nn/a\n2\nNA\n', options);
+    const v = col(profile, 'v');
+    expect(v.count).toBe(2);
+    expect(v.missing).toBe(4);
+    expect(v.missingTokens).toEqual([{ token: '', count: 1 }, { token: 'NA', count: 2 }, { token: 'n/a', count: 1 }]);
+  });
+
+  it('reads a decimal comma in a semicolon file', () => {
+    const { profile } = profileText('a;b\n1,5;x\n2,25;y\n3,0;z\n', options);
+    expect(profile.delimiter).toBe(';');
+    expect(profile.decimalSeparator).toBe(',');
+    expect(col(profile, 'a').type).toBe('decimal');
+    expect(num(col(profile, 'a')).mean).toBeCloseTo(6.75 / 3, 12);
+  });
+
+  it('decides day-first numeric dates from the column', () => {
+    const { profile } = profileText('d\n03/04/2024\n25/04/2024\n01/12/2023\n', options);
+    const d = col(profile, 'd');
+    expect(d.type).toBe('date');
+    expect(d.stats).toMatchObject({ min: '2023-12-01', max: '2024-04-25' });
+  });
+
+  it('flags an impossible date and a word in a numeric column', () => {
+    const { profile } = profileText('when,kg\n2025-02-28,1.5\n2025-02-30,2\n2025-03-01,many\n', options);
+    expect(col(profile, 'when').flags.map((f) => [f.rule, f.row])).toEqual([['impossible-date', 2]]);
+    expect(col(profile, 'kg').flags.map((f) => [f.rule, f.row, f.value])).toEqual([['not-a-number', 3, 'many']]);
+    expect(col(profile, 'kg').invalid).toBe(1);
+  });
+});
