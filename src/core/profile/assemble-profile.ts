@@ -5,6 +5,7 @@ import type { RuleId } from '../options';
 import { spanOfField, spanOfRecord } from '../read/cell-span';
 import { assembleColumn } from './assemble-column';
 import { capFlags, type PendingFlag } from './column-flags';
+import { severityOf } from '../rules/severity';
 import { declaredColumn } from './declared-schema';
 import { fieldTextAt } from './field-text';
 import type { JobState, ScanTotals } from './job';
@@ -54,7 +55,7 @@ export function assembleProfile(st: JobState, read: ((offset: number, length: nu
   if (options.rules.enabled.has('ragged-row')) {
     for (const g of records.ragged) {
       recordPending.push({
-        row: g.row, field: null, rule: 'ragged-row', severity: 'warning',
+        row: g.row, field: null, rule: 'ragged-row', severity: severityOf('ragged-row'),
         message: `Record ${g.row} has ${g.fields} field${g.fields === 1 ? '' : 's'} where the header has ${g.expected}; ${g.fields < g.expected ? 'the missing fields count as missing' : 'the extra fields are not profiled'}.`,
       });
     }
@@ -68,7 +69,7 @@ export function assembleProfile(st: JobState, read: ((offset: number, length: nu
         continue;
       }
       recordPending.push({
-        row: d.row, field: null, rule: 'duplicate-record', severity: 'information',
+        row: d.row, field: null, rule: 'duplicate-record', severity: severityOf('duplicate-record'),
         message: `Record ${d.row} repeats record ${d.first} exactly (line ${lines[d.first - 1]}); a candidate for review.`,
       });
     }

@@ -1,6 +1,7 @@
 // Collects a column's findings from the rules, as pending flags (row and field known; the cell's
 // exact position and, for some rules, its text are read back afterwards), then caps them per rule.
 import type { RuleId } from '../options';
+import { severityOf } from '../rules/severity';
 import type { ColumnAccumulator } from './column-accumulator';
 import type { ColumnContext } from './assemble-column';
 import type { Counted } from './frequency-table';
@@ -50,14 +51,14 @@ export function columnFlags(input: FlagInput): RuleOutcome {
   if (words && enabled.has(words[0])) {
     for (const r of invalidRows) {
       out.push({
-        row: r + 1, field, rule: words[0], severity: 'warning',
+        row: r + 1, field, rule: words[0], severity: severityOf(words[0]),
         message: `{value} does not read as ${words[1]}, unlike ${column.count - column.invalid} of ${column.count} cells in "${column.name}" — a candidate for review`,
       });
     }
   }
   if (enabled.has('impossible-date')) {
     for (const r of impossibleRows) {
-      out.push({ row: r + 1, field, rule: 'impossible-date', severity: 'warning', message: '{value} is not a date on the calendar (no such day in that month) — a candidate for review' });
+      out.push({ row: r + 1, field, rule: 'impossible-date', severity: severityOf('impossible-date'), message: '{value} is not a date on the calendar (no such day in that month) — a candidate for review' });
     }
   }
   const outcome: RuleOutcome = { pending: out, totals: new Map(), skipped: [] };

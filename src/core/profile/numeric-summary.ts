@@ -8,6 +8,7 @@ import type { BinChoice, ProfileOptions } from '../options';
 import { dagostinoPearson } from '../stats/dagostino-pearson';
 import { geometricMean } from '../stats/geometric-mean';
 import { medianAbsoluteDeviation } from '../stats/median-absolute-deviation';
+import { meanAndSd } from '../stats/mean-and-sd';
 import { Moments } from '../stats/moments';
 import { quantileSorted } from '../stats/quantile';
 import { shapiroWilk } from '../stats/shapiro-wilk';
@@ -37,6 +38,9 @@ export function binValues(sorted: Float64Array, choice: BinChoice, mode: 'nice' 
 export function numericSummary(sorted: Float64Array, _rowValues: Float64Array, level: Level, options: ProfileOptions): NumericSummary {
   const n = sorted.length;
   const m = Moments.of(sorted);
+  // Two passes for the mean and SD: one pass cannot meet NIST StRD's certified values on every set.
+  const ms = meanAndSd(sorted);
+  const sd = ms.sd ?? 0;
   const type = options.quantileType;
   const q1 = (quantileSorted(sorted, 0.25, type) ?? NaN);
   const median = (quantileSorted(sorted, 0.5, type) ?? NaN);
@@ -47,10 +51,10 @@ export function numericSummary(sorted: Float64Array, _rowValues: Float64Array, l
   const stats: NumericStats = {
     count: n,
     sum: m.total,
-    mean: m.mean,
-    sd: m.sd ?? 0,
-    variance: m.variance ?? 0,
-    sem: m.sem ?? 0,
+    mean: ms.mean ?? m.mean,
+    sd,
+    variance: sd * sd,
+    sem: n > 1 ? sd / Math.sqrt(n) : 0,
     min,
     max,
     range: max - min,

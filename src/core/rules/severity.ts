@@ -1,6 +1,6 @@
 // How strongly each rule's findings are shown. Every flag is a candidate for review, never an error,
 // so no rule uses `error`. The order: a far outlier, a broken declared constraint or a ragged row
-// (warning) ranks above an ordinary outlier or a malformed cell (information), which ranks above
+// or a cell that does not fit its column's type (warning) ranks above an ordinary outlier (information), which ranks above
 // tidiness findings such as stray spaces or spelling variants (hint).
 import type { RuleId } from '../options';
 import type { Severity } from '../profile/types';
@@ -11,10 +11,10 @@ export const RULE_SEVERITY: Readonly<Record<RuleId, Severity>> = Object.freeze({
   'z-score': 'information',
   grubbs: 'information',
   'generalized-esd': 'information',
-  'not-a-number': 'information',
-  'not-a-date': 'information',
-  'impossible-date': 'information',
-  'not-a-boolean': 'information',
+  'not-a-number': 'warning',
+  'not-a-date': 'warning',
+  'impossible-date': 'warning',
+  'not-a-boolean': 'warning',
   'out-of-domain': 'information',
   'duplicate-key': 'information',
   'duplicate-record': 'information',

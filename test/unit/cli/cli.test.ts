@@ -1,0 +1,81 @@
+// End-to-end through the built command line (dist/cli.js; `npm test` builds before the unit tests).
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import type { Profile } from '../../../src/core/profile/types';
+
+const root = join(__dirname, '../../..');
+const cli = join(root, 'dist/cli.js');
+const run = (args: string[]) => spawnSync(process.execPath, [cli, ...args], { encoding: 'utf8', cwd: root });
+const dir = mkdtempSync(join(tmpdir(), 'assay-cli-'));
+const file = (name: string, text: string) => {
+  const p = join(dir, name);
+  writeFileSync(p, text);
+  return p;
+};
+
+// Exit statuses as documented in the usage text (0 done, 1 --fail-on met, 2 bad input or options):
+// the convention of grep and diff (common practice).
+describe('assay command line', () => {
+  const clean = file('clean.csv', 'k,v\n1,10\n2,11\n3,12\n4,11\n5,10\n');
+  const dirty = file('dirty.csv', 'k,v\n1,10\n2,eleven\n3,12\n4,11\n5,10\n');
+
+  it('prints the profile as JSON with the documented members', () => {
+    const r = run([clean, '--format', 'json']);
+    expect(r.status).toBe(0);
+    const p = JSON.parse(r.stdout) as Profile;
+    expect(p).toMatchObject({ rows: 5, delimiter: ',', encoding: 'utf-8', ragged: [] });
+    expect(Object.keys(p.columns[1]!)).toEqual(expect.arrayContaining(['name', 'type', 'level', 'count', 'missing', 'invalid', 'distinct', 'stats', 'histogram', 'frequencies', 'flags']));
+    expect(p.columns[1]!.histogram!.edges.length).toBe(p.columns[1]!.histogram!.counts.length + 1);
+  });
+
+  it('prints the Markdown report and the text view with file:line:column', () => {
+    expect(run([clean, '--format', 'markdown']).stdout).toContain('| Column');
+    const text = run([dirty]).stdout;
+    expect(text).toContain(`${dirty}:3:3: warning: not-a-number`);
+  });
+
+  it('gates a delivery with --fail-on', () => {
+    expect(run([clean, '--fail-on', 'invalid']).status).toBe(0);
+    const r = run([dirty, '--fail-on', 'invalid', '-q']);
+    expect(r.status).toBe(1);
+    expect(r.stderr).toBe('assay: 1 invalid cell found\n');
+    expect(run([dirty, '--fail-on', 'flags']).status).toBe(1);
+    expect(run([clean, '--fail-on', 'constraints']).status).toBe(0);
+  });
+
+  it('fails with one clear line and status 2 for bad input or options', () => {
+    for (const args of [[join(dir, 'missing.csv')], [clean, '--bins', 'many'], [clean, '--format', 'xml'], [clean, '--nope'], [], [dir]]) {
+      const r = run(args);
+      expect(r.status, args.join(' ')).toBe(2);
+      expect(r.stderr.trim().split('\n')).toHaveLength(1);
+      expect(r.stderr.startsWith('assay: ')).toBe(true);
+    }
+  });
+
+  it('compares groups with --group-by', () => {
+    const p = JSON.parse(run([file('g.csv', 'g,x\na,1\na,3\nb,10\nb,14\nb,12\n'), '--group-by', 'g', '--format', 'json']).stdout) as Profile;
+    // Hand-checkable: group b = 10, 12, 14 (mean 12, SD 2, median 12); a = 1, 3 (mean 2).
+    expect(p.groups[0]).toMatchObject({ numeric: 'x', by: 'g', groups: [{ value: 'b', count: 3, mean: 12, sd: 2, median: 12 }, { value: 'a', count: 2, mean: 2 }] });
+  });
+});
+
+// The W3C CSV on the Web Working Group's validation tests (subset; test/fixtures/csvw/SOURCES.md):
+// valid cases exit 0, invalid ones exit 1 (a violated constraint or invalid metadata, named on stderr).
+describe('W3C CSV on the Web validation tests through the CLI', () => {
+  const fx = join(root, 'test/fixtures/csvw');
+  interface Case { id: string; expect: 'valid' | 'invalid'; name: string; metadata: string; csv: string }
+  const cases = JSON.parse(readFileSync(join(fx, 'cases.json'), 'utf8')) as Case[];
+  for (const c of cases) {
+    it(`${c.id} ${c.expect}: ${c.name}`, () => {
+      const r = run([join(fx, c.csv), '--metadata', join(fx, c.metadata), '--fail-on', 'constraints', '--format', 'json', '-q']);
+      if (c.expect === 'valid') expect(r.status, r.stderr).toBe(0);
+      else {
+        expect(r.status, r.stdout.slice(0, 400)).toBe(1);
+        expect(r.stderr).toMatch(/constraint violation|metadata is invalid/);
+      }
+    });
+  }
+});
