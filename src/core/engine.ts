@@ -26,6 +26,11 @@ export interface ProfileSession {
   rebin(column: string, bins: BinChoice, edges: 'nice' | 'exact'): { histogram: Histogram | null; grouped: GroupedTable | null } | null;
   /** Per-group summaries of a numeric column split by a categorical one; null when either does not fit. */
   compareGroups(numeric: string, by: string): GroupComparison | null;
+  /**
+   * Where a value stands in a numeric or date column: how many values are below it and equal to it,
+   * and its mid-rank percentile 100 (below + equal / 2) / n. Null for other columns.
+   */
+  standing(column: string, value: number): { below: number; equal: number; n: number; percentile: number } | null;
 }
 
 export interface ProfileJob {

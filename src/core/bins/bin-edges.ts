@@ -51,14 +51,19 @@ const intervals = (k: number): string => `${k} interval${k === 1 ? '' : 's'}`;
 /** A width for a label: nice widths print as they are, others to 6 significant digits. */
 const show = (w: number): string => String(Number(w.toPrecision(6)));
 
-/** Nice edges j·w for j from ⌊min/w⌋ (edge ≤ min) to the first j with edge > max. */
-function niceEdges(min: number, max: number, w: DecimalWidth): number[] {
+/** The multiples j0·w ≤ min (the largest such) and j1·w > max (the smallest such). */
+function niceSpan(min: number, max: number, w: DecimalWidth): { j0: number; j1: number } {
   let j0 = Math.floor(min / w.width);
   while (edgeAt(j0, w) > min) j0--;
   while (edgeAt(j0 + 1, w) <= min) j0++;
   let j1 = Math.floor(max / w.width) + 1;
   while (edgeAt(j1 - 1, w) > max) j1--;
   while (edgeAt(j1, w) <= max) j1++;
+  return { j0, j1 };
+}
+
+/** Nice edges j·w for j from j0 to j1. */
+function niceEdges({ j0, j1 }: { j0: number; j1: number }, w: DecimalWidth): number[] {
   const edges: number[] = [];
   for (let j = j0; j <= j1; j++) edges.push(edgeAt(j, w));
   return edges;
@@ -108,7 +113,7 @@ export function binEdges(sorted: Float64Array, choice: BinChoice, mode: 'nice' |
     if (mode === 'exact') return { rule: choice.rule, label: `All values equal: ${intervals(1)} of width 1`, width: 1, edges: [min - 0.5, min + 0.5], edgeMode: mode };
     let w = niceWidth(1) as DecimalWidth;
     while (edgeAt(Math.floor(min / w.width) + 1, w) === edgeAt(Math.floor(min / w.width), w)) w = niceWidth(w.width * 10) as DecimalWidth; // |v| ≥ 2^53
-    const edges = niceEdges(min, max, w);
+    const edges = niceEdges(niceSpan(min, max, w), w);
     return { rule: choice.rule, label: `All values equal: ${intervals(1)} of width ${show(w.width)}`, width: w.width, edges, edgeMode: mode };
   }
 
@@ -166,18 +171,19 @@ export function binEdges(sorted: Float64Array, choice: BinChoice, mode: 'nice' |
   }
 
   let w = choice.rule === 'width' ? (decimalWidth(width) ?? { width, integer: NaN, exponent: 0 }) : (niceWidth(width) as DecimalWidth);
-  let edges = niceEdges(min, max, w);
-  const wanted = edges.length - 1;
+  let span = niceSpan(min, max, w);
+  const wanted = span.j1 - span.j0;
   if (wanted > maxBins) {
     // Jump near the cap first (the count can be huge for a tiny fixed width), then step up.
     w = niceWidth(Math.max(w.width, range / maxBins)) as DecimalWidth;
-    edges = niceEdges(min, max, w);
-    while (edges.length - 1 > maxBins) {
+    span = niceSpan(min, max, w);
+    while (span.j1 - span.j0 > maxBins) {
       w = nextNiceWidth(w);
-      edges = niceEdges(min, max, w);
+      span = niceSpan(min, max, w);
     }
     notes.push(`capped at ${maxBins} intervals (the ${choice.rule === 'width' ? 'width' : 'rule'} gives ${wanted})`);
   }
+  const edges = niceEdges(span, w);
   const k = edges.length - 1;
   const label = [name, ...notes, `${intervals(k)} of width ${show(w.width)}`].join(', ');
   return { rule, label, width: w.width, edges, edgeMode: mode };

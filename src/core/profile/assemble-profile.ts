@@ -27,7 +27,7 @@ export function assembleProfile(st: JobState, read: ((offset: number, length: nu
   const readRow = read ? (row: number) => read(offsets[row - 1]!, recordLength(row)) : null;
 
   const columns: ColumnProfile[] = [];
-  const typed = new Map<string, { sorted: Float64Array; rowValues: Float64Array }>();
+  const typed = new Map<string, { sorted: Float64Array; rowValues: Float64Array; numeric: boolean }>();
   const allPending: { column: ColumnProfile | null; flags: PendingFlag[]; totals: Map<RuleId, number> }[] = [];
   st.columns.forEach((acc, i) => {
     const name = st.names[i]!;
@@ -47,7 +47,7 @@ export function assembleProfile(st: JobState, read: ((offset: number, length: nu
     }
     columns.push(column);
     allPending.push({ column, flags: pending, totals });
-    if (rowValues && sorted && (column.type === 'integer' || column.type === 'decimal')) typed.set(name, { sorted, rowValues });
+    if (rowValues && sorted) typed.set(name, { sorted, rowValues, numeric: column.type === 'integer' || column.type === 'decimal' });
   });
 
   // Record-level findings.
@@ -139,13 +139,22 @@ export function assembleProfile(st: JobState, read: ((offset: number, length: nu
   const session: ProfileSession = {
     rebin(column, bins, edges) {
       const t = typed.get(column);
-      return t ? binValues(t.sorted, bins, edges) : null;
+      return t?.numeric ? binValues(t.sorted, bins, edges) : null;
+    },
+    standing(column, value) {
+      const t = typed.get(column);
+      if (!t || t.sorted.length === 0 || Number.isNaN(value)) return null;
+      const below = lowerBound(t.sorted, value);
+      let end = below;
+      while (end < t.sorted.length && t.sorted[end] === value) end++;
+      const n = t.sorted.length;
+      return { below, equal: end - below, n, percentile: (100 * (below + (end - below) / 2)) / n };
     },
     compareGroups(numeric, by) {
       const t = typed.get(numeric);
       const i = st.names.indexOf(by);
       const acc = i >= 0 ? st.columns[i] : undefined;
-      if (!t || !acc || !acc.codes || numeric === by) return null;
+      if (!t?.numeric || !acc || !acc.codes || numeric === by) return null;
       return compareGroups(numeric, by, t.rowValues, acc.codes.view(), [...acc.categories.keys()], options.quantileType);
     },
   };
@@ -155,8 +164,8 @@ export function assembleProfile(st: JobState, read: ((offset: number, length: nu
       st.notices.push({ code: 'group-by', severity: 'warning', message: `--group-by: there is no column "${by}"; columns are ${st.names.map((n) => `"${n}"`).join(', ')}.` });
       continue;
     }
-    for (const name of typed.keys()) {
-      const g = name === by ? null : session.compareGroups(name, by);
+    for (const [name, t] of typed) {
+      const g = name === by || !t.numeric ? null : session.compareGroups(name, by);
       if (g) groups.push(g);
     }
   }
@@ -204,6 +213,18 @@ function sameBytes(a: Uint8Array, b: Uint8Array, st: JobState): boolean {
     if (!sa || !sb) return !sa && !sb;
     if (fieldTextAt(a, sa.startOffset, sa.endOffset, q) !== fieldTextAt(b, sb.startOffset, sb.endOffset, q)) return false;
   }
+}
+
+/** First index whose value is not below `v` (sorted ascending). */
+function lowerBound(sorted: Float64Array, v: number): number {
+  let lo = 0;
+  let hi = sorted.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >>> 1;
+    if (sorted[mid]! < v) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
 }
 
 function lineEndingOf(s: ScanTotals): LineEnding {

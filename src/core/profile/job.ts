@@ -375,7 +375,7 @@ function notDelimited(reason: string, source: JobSource, bytes: number, options:
       methods: { quantile: `Hyndman & Fan type ${options.quantileType}`, bins: options.bins.rule, edges: options.edges, missingTokens: [...options.missingTokens] },
     },
     index: { offsets: new Float64Array(0), lines: new Float64Array(0) },
-    session: { rebin: () => null, compareGroups: () => null },
+    session: { rebin: () => null, compareGroups: () => null, standing: () => null },
   };
 }
 

@@ -132,3 +132,19 @@ describe('types, levels and missing values', () => {
     expect(col(profile, 'kg').invalid).toBe(1);
   });
 });
+
+describe('the session kept for follow-up questions', () => {
+  const result = profileText('g,x\na,1\nb,2\na,2\nb,3\n', options);
+  it('places a value by mid-rank percentile (common practice: 100 (below + equal/2) / n)', () => {
+    expect(result.session.standing('x', 2)).toEqual({ below: 1, equal: 2, n: 4, percentile: 50 });
+    expect(result.session.standing('g', 2)).toBeNull();
+  });
+  it('re-bins a numeric column with another rule', () => {
+    const r = result.session.rebin('x', { rule: 'count', count: 2 }, 'exact');
+    expect(r?.histogram?.counts).toEqual([1, 3]); // numpy.histogram([1,2,2,3], bins=2) gives [1, 3] (from memory)
+    expect(result.session.rebin('g', { rule: 'sturges' }, 'nice')).toBeNull();
+  });
+  it('compares groups on request', () => {
+    expect(result.session.compareGroups('x', 'g')?.groups.map((g) => [g.value, g.mean])).toEqual([['a', 1.5], ['b', 2.5]]);
+  });
+});
