@@ -23,14 +23,18 @@ export type HostToPanel =
 export type PanelToHost =
   | { type: 'ready' }
   | { type: 'reveal'; uri: string; row: number; field: number | null }
-  | { type: 'copy'; uri: string; version: number; target: CopyTarget; column?: string; by?: string }
+  /** `report` asks the host to write the whole report as a document (and open it), not to copy it. */
+  | { type: 'copy'; uri: string; version: number; target: CopyTarget; column?: string; by?: string; bins?: BinChoice }
   | { type: 'request-bins'; uri: string; version: number; requestId: number; column: string; bins: BinChoice }
   | { type: 'request-groups'; uri: string; version: number; requestId: number; numeric: string; by: string }
   | { type: 'select-column'; uri: string; column: string | null }
-  /** Sent after each render so tests (and the host) know what the panel shows. */
+  /**
+   * Sent after each render so tests (and the host) know what the panel shows. `flags` is the total
+   * number of findings (every column's and the record-level flagTotals), not only the kept ones.
+   */
   | { type: 'rendered'; uri: string; version: number; columns: string[]; rows: number; flags: number; partial: boolean };
 
-type Shape = Record<string, 'string' | 'number' | 'boolean' | 'object' | 'string?' | 'number?' | 'object?' | 'number|null' | 'string|null' | 'array'>;
+type Shape = Record<string, 'string' | 'number' | 'boolean' | 'object' | 'string?' | 'number?' | 'object?' | 'object|null' | 'number|null' | 'string|null' | 'array'>;
 
 function matches(m: Record<string, unknown>, shape: Shape): boolean {
   for (const [key, kind] of Object.entries(shape)) {
@@ -39,6 +43,7 @@ function matches(m: Record<string, unknown>, shape: Shape): boolean {
       case 'string?': if (v !== undefined && typeof v !== 'string') return false; break;
       case 'number?': if (v !== undefined && typeof v !== 'number') return false; break;
       case 'object?': if (v !== undefined && (typeof v !== 'object' || v === null)) return false; break;
+      case 'object|null': if (v !== null && (typeof v !== 'object' || Array.isArray(v))) return false; break;
       case 'number|null': if (v !== null && typeof v !== 'number') return false; break;
       case 'string|null': if (v !== null && typeof v !== 'string') return false; break;
       case 'array': if (!Array.isArray(v)) return false; break;
@@ -54,8 +59,8 @@ const HOST_TO_PANEL: Record<HostToPanel['type'], Shape> = {
   'progress': { uri: 'string', version: 'number', fraction: 'number|null', message: 'string' },
   'failed': { uri: 'string', version: 'number', message: 'string' },
   'focus-column': { uri: 'string', column: 'string' },
-  'bins-result': { uri: 'string', version: 'number', requestId: 'number', column: 'string', histogram: 'object?', grouped: 'object?', error: 'string?' },
-  'groups-result': { uri: 'string', version: 'number', requestId: 'number', comparison: 'object?', error: 'string?' },
+  'bins-result': { uri: 'string', version: 'number', requestId: 'number', column: 'string', histogram: 'object|null', grouped: 'object|null', error: 'string?' },
+  'groups-result': { uri: 'string', version: 'number', requestId: 'number', comparison: 'object|null', error: 'string?' },
 };
 
 const COPY_TARGETS: readonly string[] = ['summary', 'column', 'frequencies', 'grouped', 'groups', 'flags', 'report'];
@@ -63,7 +68,7 @@ const COPY_TARGETS: readonly string[] = ['summary', 'column', 'frequencies', 'gr
 const PANEL_TO_HOST: Record<PanelToHost['type'], Shape> = {
   'ready': {},
   'reveal': { uri: 'string', row: 'number', field: 'number|null' },
-  'copy': { uri: 'string', version: 'number', target: 'string', column: 'string?', by: 'string?' },
+  'copy': { uri: 'string', version: 'number', target: 'string', column: 'string?', by: 'string?', bins: 'object?' },
   'request-bins': { uri: 'string', version: 'number', requestId: 'number', column: 'string', bins: 'object' },
   'request-groups': { uri: 'string', version: 'number', requestId: 'number', numeric: 'string', by: 'string' },
   'select-column': { uri: 'string', column: 'string|null' },
