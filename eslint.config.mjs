@@ -38,4 +38,14 @@ export default tseslint.config(
       ],
     },
   },
+  {
+    // The panel builds its DOM from elements and text only: data never becomes markup.
+    files: ['webview/**/*.ts'],
+    rules: {
+      'no-restricted-syntax': ['error',
+        { selector: "AssignmentExpression[left.property.name=/^(innerHTML|outerHTML)$/]", message: 'Build elements with createElement and textContent; never assign markup.' },
+        { selector: "CallExpression[callee.property.name=/^(insertAdjacentHTML|write|writeln)$/]", message: 'Build elements with createElement and textContent; never insert markup.' },
+      ],
+    },
+  },
 );
