@@ -51,6 +51,15 @@ const intervals = (k: number): string => `${k} interval${k === 1 ? '' : 's'}`;
 /** A width for a label: nice widths print as they are, others to 6 significant digits. */
 const show = (w: number): string => String(Number(w.toPrecision(6)));
 
+/**
+ * A width whose multiples j·w near the data are still distinct doubles: for data that vary only in
+ * their last bits (e.g. 1e6 and 1e6 + 1e-10) a rule's width can be so small that j passes 2^53.
+ */
+function representable(min: number, max: number, w: DecimalWidth): DecimalWidth {
+  const size = Math.max(Math.abs(min), Math.abs(max));
+  return size / w.width > 2 ** 50 ? (niceWidth(size / 2 ** 50) as DecimalWidth) : w;
+}
+
 /** The multiples j0·w ≤ min (the largest such) and j1·w > max (the smallest such). */
 function niceSpan(min: number, max: number, w: DecimalWidth): { j0: number; j1: number } {
   let j0 = Math.floor(min / w.width);
@@ -67,6 +76,11 @@ function niceEdges({ j0, j1 }: { j0: number; j1: number }, w: DecimalWidth): num
   const edges: number[] = [];
   for (let j = j0; j <= j1; j++) edges.push(edgeAt(j, w));
   return edges;
+}
+
+/** Drops repeated edges, which appear only when intervals are narrower than the data's resolution. */
+function distinct(edges: number[]): number[] {
+  return edges.filter((e, i) => i === 0 || e > (edges[i - 1] as number));
 }
 
 /** numpy.linspace(min, max, k + 1): min + i·step, the last edge exactly max. */
@@ -160,22 +174,25 @@ export function binEdges(sorted: Float64Array, choice: BinChoice, mode: 'nice' |
       edges = [];
       for (let i = 0; i <= wanted; i++) edges.push(at(i));
       // range / width can round just below a whole number: make sure max is covered.
-      while ((edges[edges.length - 1] as number) < max) edges.push(at(edges.length));
+      for (let extra = 0; extra < 2 && (edges[edges.length - 1] as number) < max; extra++) edges.push(at(edges.length));
+      if ((edges[edges.length - 1] as number) < max) edges[edges.length - 1] = max; // a width below the data's resolution
       actual = width;
     } else {
       edges = linspace(min, max, wanted);
       actual = range / wanted;
     }
+    edges = distinct(edges);
     const label = [name, ...notes, `${intervals(edges.length - 1)} of width ${show(actual)}`].join(', ');
     return { rule, label, width: actual, edges, edgeMode: mode };
   }
 
   let w = choice.rule === 'width' ? (decimalWidth(width) ?? { width, integer: NaN, exponent: 0 }) : (niceWidth(width) as DecimalWidth);
+  w = representable(min, max, w);
   let span = niceSpan(min, max, w);
   const wanted = span.j1 - span.j0;
   if (wanted > maxBins) {
     // Jump near the cap first (the count can be huge for a tiny fixed width), then step up.
-    w = niceWidth(Math.max(w.width, range / maxBins)) as DecimalWidth;
+    w = representable(min, max, niceWidth(Math.max(w.width, range / maxBins)) as DecimalWidth);
     span = niceSpan(min, max, w);
     while (span.j1 - span.j0 > maxBins) {
       w = nextNiceWidth(w);

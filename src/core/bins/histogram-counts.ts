@@ -13,7 +13,7 @@
  *
  * Throws RangeError when there are fewer than two edges.
  *
- * @example histogramCounts([0, 1, 2, 2.5, 5], [0, 2.5, 5], true) // [2, 3] ([0, 2.5) and [2.5, 5])
+ * @example histogramCounts([0, 1, 2, 2.5, 5], [0, 2.5, 5], true) // [3, 2] ([0, 2.5) and [2.5, 5])
  */
 export function histogramCounts(values: ArrayLike<number>, edges: readonly number[], closedLast: boolean): number[] {
   const k = edges.length - 1;

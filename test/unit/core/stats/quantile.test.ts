@@ -70,7 +70,7 @@ describe('quantileSorted', () => {
     );
   });
 
-  it('gives R\'s documented quantile(1:10) type results (from memory: type 1 → 3, 2 → 3, 3 → 2, 6 → 2.75, 7 → 3.25 at p = 0.25)', () => {
+  it('gives the textbook first quartiles of 1..10 (Hyndman & Fan definitions; R quantile(1:10, 0.25, type = t) agrees, from memory)', () => {
     const x = sorted([1, 2, 3, 4, 5, 6, 7, 8, 9, 10]);
     expect([1, 2, 3, 6, 7].map((t) => quantileSorted(x, 0.25, t))).toEqual([3, 3, 2, 2.75, 3.25]);
   });
