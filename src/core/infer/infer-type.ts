@@ -52,7 +52,7 @@ export function inferType(
   if (forced) return make(forced, 'declared');
   if (nonMissing === 0) return make('text', 'no non-missing cells');
   const half = nonMissing / 2;
-  const rest = (n: number) => (nonMissing - n > 0 ? `; ${plural(nonMissing - n, 'cell')} do${nonMissing - n === 1 ? 'es' : ''} not` : '');
+  const rest = (n: number) => (nonMissing - n > 0 ? ` (${nonMissing - n} ${nonMissing - n === 1 ? 'does' : 'do'} not)` : '');
   if (numeric > half && numeric >= dates) {
     const type: ColumnType = k.decimal > 0 ? 'decimal' : 'integer';
     return make(type, `${numeric} of ${nonMissing} non-missing cells read as ${type === 'decimal' ? 'numbers' : 'whole numbers'}${rest(numeric)}`);
