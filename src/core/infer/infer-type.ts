@@ -27,10 +27,6 @@ export interface TypeDecision {
   slashOrder: SlashOrder;
 }
 
-function plural(n: number, word: string): string {
-  return `${n} ${word}${n === 1 ? '' : 's'}`;
-}
-
 /**
  * @param slashValid how many numeric dates are valid when read day-first and month-first.
  */
