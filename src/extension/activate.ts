@@ -1,0 +1,75 @@
+// The composition root, shared by the desktop and the web entries: builds every service once, wires
+// them together and puts each in the disposal list of its lifetime. The platform supplies only how
+// to start a worker and how a large file reaches it.
+import * as vscode from 'vscode';
+import { registerCommands } from './commands/register-commands';
+import { Configuration } from './config/configuration';
+import { activeDataUri, dataUrisInTabs } from './editor/active-data-file';
+import { isDataLanguage } from './data-files';
+import { followCursor } from './panel/follow-cursor';
+import { PanelManager } from './panel/panel-manager';
+import type { Platform } from './platform';
+import { DocumentProfiler } from './profiling/document-profiler';
+import { ProfileStore } from './profiling/profile-store';
+import { StatusBar } from './status/status-bar';
+import { createTestApi } from './test-api';
+import type { AssayExports } from './test-api';
+import { DisposableList } from './util/disposable-list';
+import { countedStart } from './worker/counted-start';
+import { WorkerClient } from './worker/worker-client';
+
+export function activateAssay(context: vscode.ExtensionContext, platform: Platform): AssayExports {
+  const extension = new DisposableList();
+  context.subscriptions.push(extension);
+
+  const log = extension.add(vscode.window.createOutputChannel('Assay', { log: true }));
+  const config = extension.add(new Configuration());
+  const workers = countedStart(platform.workerStarter(context.extensionUri));
+  const worker = extension.add(new WorkerClient(workers.start));
+  const store = extension.add(new ProfileStore());
+  const profiler = extension.add(new DocumentProfiler(worker, store, config, platform, log));
+  const status = extension.add(new StatusBar(store));
+  const panels = extension.add(new PanelManager({ extensionUri: context.extensionUri, store, worker, config, log }, profiler));
+
+  /** Files still needed: shown in a tab, or shown by the panel. The rest are dropped. */
+  const release = (): void => {
+    const needed = new Set(dataUrisInTabs().map((u) => u.toString()));
+    const shown = panels.uri;
+    if (shown !== undefined) needed.add(shown);
+    for (const uri of profiler.trackedUris()) if (!needed.has(uri.toString())) profiler.untrack(uri);
+    // No file to keep current and no panel: the worker is not needed (it restarts on the next job).
+    if (profiler.trackedCount === 0 && panels.current === undefined) worker.stop('worker: nothing left to profile');
+  };
+
+  const onActive = (): void => {
+    const uri = activeDataUri();
+    if (uri !== undefined) {
+      profiler.ensure(uri);
+      panels.follow(uri);
+    }
+    status.show(uri);
+  };
+
+  extension.add(store.onDidChange(() => status.update()));
+  extension.add(vscode.window.onDidChangeActiveTextEditor(onActive));
+  extension.add(vscode.window.tabGroups.onDidChangeTabs(() => { onActive(); release(); }));
+  extension.add(vscode.window.onDidChangeVisibleTextEditors((editors) => {
+    for (const e of editors) if (isDataLanguage(e.document.languageId)) profiler.ensure(e.document.uri);
+  }));
+  extension.add(panels.onDidChange(release));
+  extension.add(followCursor(panels, store));
+  for (const d of registerCommands({
+    'assay.openPanel': () => panels.open(),
+    'assay.refresh': () => {
+      const uri = activeDataUri() ?? (panels.uri !== undefined ? vscode.Uri.parse(panels.uri) : undefined);
+      if (uri !== undefined) profiler.refresh(uri);
+    },
+  })) extension.add(d);
+
+  onActive();
+  for (const e of vscode.window.visibleTextEditors) if (isDataLanguage(e.document.languageId)) profiler.ensure(e.document.uri);
+  const testApi = createTestApi({ store, panels, status, liveWorkers: () => workers.live() });
+  extension.add(testApi.subscription);
+
+  return { __test: testApi.api };
+}
