@@ -148,3 +148,36 @@ describe('the session kept for follow-up questions', () => {
     expect(result.session.compareGroups('x', 'g')?.groups.map((g) => [g.value, g.mean])).toEqual([['a', 1.5], ['b', 2.5]]);
   });
 });
+
+describe('encodings and caps through the engine', () => {
+  it('reads UTF-16 LE with a BOM and places flags in the re-encoded text', () => {
+    const text = 'name,kg\nÅsa,1\nBo,2\nBjörn,zwei\n';
+    const bytes = new Uint8Array(2 + text.length * 2);
+    bytes[0] = 0xff;
+    bytes[1] = 0xfe;
+    for (let i = 0; i < text.length; i++) {
+      bytes[2 + 2 * i] = text.charCodeAt(i) & 0xff;
+      bytes[3 + 2 * i] = text.charCodeAt(i) >> 8;
+    }
+    const { profile } = profileBytes(bytes, options);
+    expect(profile).toMatchObject({ encoding: 'utf-16le', bom: true, rows: 3 });
+    expect(profile.columns[0]!.frequencies.map((f) => f.value).sort()).toEqual(['Björn', 'Bo', 'Åsa']);
+    expect(col(profile, 'kg').flags[0]).toMatchObject({ value: 'zwei', span: { startLine: 4, startColumn: 7 } });
+  });
+
+  it('falls back to windows-1252 for bytes that are not UTF-8', () => {
+    // 0xE9 is "é" in windows-1252 (WHATWG Encoding Standard index) and invalid alone in UTF-8.
+    const bytes = new Uint8Array([...new TextEncoder().encode('city\nCaf'), 0xe9, 0x0a]);
+    const { profile } = profileBytes(bytes, options);
+    expect(profile.encoding).toBe('windows-1252');
+    expect(profile.columns[0]!.frequencies[0]!.value).toBe('Café');
+  });
+
+  it('caps flags per rule and column but reports the true total', () => {
+    const rows = Array.from({ length: 2500 }, (_, i) => (i % 2 ? String(i) : 'x')).join('\n');
+    const { profile } = profileText('v\n' + rows + '\n', resolveOptions({ types: { v: 'integer' }, rules: { maxFlagsPerRule: 100 } }));
+    const v = col(profile, 'v');
+    expect(v.flags.filter((f) => f.rule === 'not-a-number')).toHaveLength(100);
+    expect(v.flagTotals.find((t) => t.rule === 'not-a-number')).toMatchObject({ total: 1250, kept: 100 });
+  });
+});
