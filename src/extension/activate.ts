@@ -2,15 +2,22 @@
 // them together and puts each in the disposal list of its lifetime. The platform supplies only how
 // to start a worker and how a large file reaches it.
 import * as vscode from 'vscode';
+import { objectArgument, stringMember } from './commands/command-args';
 import { registerCommands } from './commands/register-commands';
 import { Configuration } from './config/configuration';
+import { CopyCommands, commandTarget, pickColumn, storedFor } from './copy/copy-commands';
+import { FlagDiagnostics } from './diagnostics/flag-diagnostics';
+import { registerQuickFixes } from './diagnostics/quick-fix-provider';
 import { activeDataUri, dataUrisInTabs } from './editor/active-data-file';
 import { isDataLanguage } from './data-files';
+import { registerHovers } from './hover/cell-hover-provider';
+import { FlagNavigator } from './navigation/flag-navigator';
 import { followCursor } from './panel/follow-cursor';
 import { PanelManager } from './panel/panel-manager';
 import type { Platform } from './platform';
 import { DocumentProfiler } from './profiling/document-profiler';
 import { ProfileStore } from './profiling/profile-store';
+import { ReportSaver } from './report/save-report';
 import { StatusBar } from './status/status-bar';
 import { createTestApi } from './test-api';
 import type { AssayExports } from './test-api';
@@ -29,7 +36,27 @@ export function activateAssay(context: vscode.ExtensionContext, platform: Platfo
   const store = extension.add(new ProfileStore());
   const profiler = extension.add(new DocumentProfiler(worker, store, config, platform, log));
   const status = extension.add(new StatusBar(store));
-  const panels = extension.add(new PanelManager({ extensionUri: context.extensionUri, store, worker, config, log }, profiler));
+  // The panel's "Save report" goes through the same saver as the command (bound once both exist).
+  // Called only after `reports` below exists (the panel cannot post before it is created).
+  const saveReport = (uri: vscode.Uri): Promise<unknown> => reports.save('markdown', { uri: uri.toString() });
+  const panels = extension.add(new PanelManager({ extensionUri: context.extensionUri, store, worker, config, log, saveReport }, profiler));
+  const reports = new ReportSaver({ store, config, panels });
+  const copies = new CopyCommands({ store, config, panels, worker });
+  const navigator = new FlagNavigator(store);
+  extension.add(new FlagDiagnostics(store, config));
+  extension.add(registerQuickFixes(store));
+  extension.add(registerHovers(store, worker, config));
+
+  /** Opens the panel on the file and its column (a hover link names both; else the user picks the column). */
+  const showColumn = async (raw: unknown): Promise<void> => {
+    const uri = commandTarget(raw, panels);
+    const stored = storedFor(store, uri);
+    if (uri === undefined || stored === undefined) return;
+    const column = stringMember(objectArgument(raw), 'column') ?? await pickColumn(panels, stored, stored.profile.columns, 'Assay: show which column in the profile?');
+    if (column === undefined || !stored.profile.columns.some((c) => c.name === column)) return;
+    panels.open(uri);
+    panels.current?.focusColumn(uri.toString(), column);
+  };
 
   /** Files still needed: shown in a tab, or shown by the panel. The rest are dropped. */
   const release = (): void => {
@@ -64,6 +91,19 @@ export function activateAssay(context: vscode.ExtensionContext, platform: Platfo
       const uri = activeDataUri() ?? (panels.uri !== undefined ? vscode.Uri.parse(panels.uri) : undefined);
       if (uri !== undefined) profiler.refresh(uri);
     },
+    'assay.nextFlag': (args) => navigator.go(1, args),
+    'assay.previousFlag': (args) => navigator.go(-1, args),
+    'assay.listFlags': (args) => navigator.list(args),
+    'assay.limitFlagNavigation': (args) => navigator.limitTo(args),
+    'assay.showColumn': showColumn,
+    'assay.copySummary': (args) => copies.run('summary', args),
+    'assay.copyColumnSummary': (args) => copies.run('column', args),
+    'assay.copyFrequencyTable': (args) => copies.run('frequencies', args),
+    'assay.copyGroupedTable': (args) => copies.run('grouped', args),
+    'assay.copyGroupComparison': (args) => copies.run('groups', args),
+    'assay.copyFlags': (args) => copies.run('flags', args),
+    'assay.saveReport': (args) => reports.save('markdown', args),
+    'assay.saveHtmlReport': (args) => reports.save('html', args),
   })) extension.add(d);
 
   onActive();

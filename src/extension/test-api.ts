@@ -22,6 +22,8 @@ export interface AssayTestApi {
   statusBarText(): string | undefined;
   /** The URI the open panel shows, or undefined when no panel is open. */
   panelUri(): string | undefined;
+  /** The column the open panel has open (as the host last told it or heard from it), or null. */
+  panelColumn(): string | null | undefined;
   /** Hands a message to the open panel's handler as if its webview had posted it. */
   panelMessage(message: unknown): Promise<void>;
 }
@@ -60,6 +62,7 @@ export function createTestApi(deps: TestApiDeps): { api: AssayTestApi; subscript
     profileHistory: (uri) => [...(history.get(uri) ?? [])],
     statusBarText: () => status.text,
     panelUri: () => panels.uri,
+    panelColumn: () => panels.current?.column,
     panelMessage: (m) => panels.current?.receive(m) ?? Promise.resolve(),
   };
   return { api, subscription };

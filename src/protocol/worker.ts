@@ -8,6 +8,15 @@ import { resolveOptions } from '../core/options';
 import type { BinChoice, ProfileOptions, RuleId, RuleOptions } from '../core/options';
 import type { GroupComparison, GroupedTable, Histogram, Profile } from '../core/profile/types';
 
+/** Where a value stands in a numeric or date column (the engine session's `standing` answer). */
+export interface Standing {
+  below: number;
+  equal: number;
+  n: number;
+  /** Mid-rank percentile 100 (below + equal / 2) / n. */
+  percentile: number;
+}
+
 /**
  * The options as they cross the thread boundary: `ProfileOptions` holds a Set (rules.enabled), so the
  * host sends this plain form (`toWireOptions`) and the worker rebuilds the frozen object with
@@ -63,6 +72,8 @@ export type HostToWorker =
     })
   | (Addressed & { type: 'rebin'; column: string; bins: BinChoice })
   | (Addressed & { type: 'groups'; numeric: string; by: string })
+  /** Where `value` (a finite number; a date as milliseconds since 1970 UTC) stands in `column`, for hovers. */
+  | (Addressed & { type: 'standing'; column: string; value: number })
   /** Cancels request `id` (cooperative: honoured between chunks). No reply besides the job's own `failed`. */
   | (Addressed & { type: 'cancel' })
   /** Drops what the worker keeps for the document (it closed). No reply. */
@@ -73,6 +84,7 @@ export type WorkerToHost =
   | (Addressed & { type: 'profiled'; final: boolean; profile: Profile; index: WireRecordIndex })
   | (Addressed & { type: 'bins-result'; column: string; histogram: Histogram | null; grouped: GroupedTable | null })
   | (Addressed & { type: 'groups-result'; comparison: GroupComparison | null })
+  | (Addressed & { type: 'standing-result'; column: string; standing: Standing | null })
   | (Addressed & { type: 'failed'; reason: 'cancelled' | 'error' | 'no-profile'; message: string });
 
 type Kind = 'string' | 'number' | 'boolean' | 'object' | 'array' | 'string|null' | 'number|null' | 'object|null' | 'index';
@@ -84,6 +96,7 @@ const HOST_TO_WORKER: Record<HostToWorker['type'], Shape> = {
   'profile': { ...ADDRESSED, name: 'string|null', size: 'number|null', options: 'object', input: 'object', firstPass: 'number|null', chunkBytes: 'number' },
   'rebin': { ...ADDRESSED, column: 'string', bins: 'object' },
   'groups': { ...ADDRESSED, numeric: 'string', by: 'string' },
+  'standing': { ...ADDRESSED, column: 'string', value: 'number' },
   'cancel': ADDRESSED,
   'forget': ADDRESSED,
 };
@@ -93,6 +106,7 @@ const WORKER_TO_HOST: Record<WorkerToHost['type'], Shape> = {
   'profiled': { ...ADDRESSED, final: 'boolean', profile: 'object', index: 'index' },
   'bins-result': { ...ADDRESSED, column: 'string', histogram: 'object|null', grouped: 'object|null' },
   'groups-result': { ...ADDRESSED, comparison: 'object|null' },
+  'standing-result': { ...ADDRESSED, column: 'string', standing: 'object|null' },
   'failed': { ...ADDRESSED, reason: 'string', message: 'string' },
 };
 
@@ -144,7 +158,12 @@ export function isHostToWorker(m: unknown): m is HostToWorker {
     if (!((m.chunkBytes as number) >= 1)) return false;
   }
   if (m.type === 'rebin' && !isBinChoice(m.bins)) return false;
+  if (m.type === 'standing' && !Number.isFinite(m.value)) return false;
   return true;
+}
+
+function isStanding(v: unknown): v is Standing {
+  return isRecord(v) && ['below', 'equal', 'n', 'percentile'].every((k) => typeof v[k] === 'number' && Number.isFinite(v[k]));
 }
 
 const FAILURE_REASONS: readonly string[] = ['cancelled', 'error', 'no-profile'];
@@ -155,6 +174,7 @@ export function isWorkerToHost(m: unknown): m is WorkerToHost {
   const shape = (WORKER_TO_HOST as Record<string, Shape | undefined>)[m.type];
   if (shape === undefined || !matches(m, shape)) return false;
   if (m.type === 'failed' && !FAILURE_REASONS.includes(m.reason as string)) return false;
+  if (m.type === 'standing-result' && m.standing !== null && !isStanding(m.standing)) return false;
   return true;
 }
 

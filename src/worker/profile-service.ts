@@ -8,7 +8,7 @@ import { fromWireOptions, isHostToWorker, transferables } from '../protocol/work
 import type { HostToWorker, WorkerToHost } from '../protocol/worker';
 import { memorySource, textSource } from './byte-source';
 import type { ByteSource, OpenFile } from './byte-source';
-import { compareGroups, rebinColumn } from './derived-tables';
+import { compareGroups, rebinColumn, standingOf } from './derived-tables';
 import type { KeptProfile } from './derived-tables';
 import { yieldToEvents } from './yield-to-events';
 
@@ -50,6 +50,7 @@ export class ProfileService {
         break;
       case 'rebin': this.derived(m, (k) => ({ type: 'bins-result', id: m.id, uri: m.uri, version: k.version, column: m.column, ...rebinColumn(k, m.column, m.bins) })); break;
       case 'groups': this.derived(m, (k) => ({ type: 'groups-result', id: m.id, uri: m.uri, version: k.version, comparison: compareGroups(k, m.numeric, m.by) })); break;
+      case 'standing': this.derived(m, (k) => ({ type: 'standing-result', id: m.id, uri: m.uri, version: k.version, column: m.column, standing: standingOf(k, m.column, m.value) })); break;
     }
   }
 
@@ -57,7 +58,7 @@ export class ProfileService {
     this.post(m, transferables(m));
   }
 
-  private derived(m: Extract<HostToWorker, { type: 'rebin' | 'groups' }>, compute: (k: KeptProfile) => WorkerToHost): void {
+  private derived(m: Extract<HostToWorker, { type: 'rebin' | 'groups' | 'standing' }>, compute: (k: KeptProfile) => WorkerToHost): void {
     const k = this.kept.get(m.uri);
     if (k === undefined) {
       this.send({ type: 'failed', id: m.id, uri: m.uri, version: m.version, reason: 'no-profile', message: 'worker: no profile is kept for this document' });

@@ -2,12 +2,18 @@
 // The exact span comes from the flag when the engine placed it; otherwise from the record index
 // (the record's first line) and a scan of that record.
 import * as vscode from 'vscode';
+import { spanRange } from '../../core/editor/span-range';
+import type { LineRange } from '../../core/editor/span-range';
 import type { CellSpan, Flag } from '../../core/profile/types';
 import type { StoredProfile } from '../profiling/profile-store';
 import { fieldRange } from './field-range';
 
+export function lineRangeToRange(r: LineRange): vscode.Range {
+  return new vscode.Range(r.start.line, r.start.character, r.end.line, r.end.character);
+}
+
 export function spanToRange(span: CellSpan): vscode.Range {
-  return new vscode.Range(span.startLine - 1, span.startColumn - 1, span.endLine - 1, span.endColumn - 1);
+  return lineRangeToRange(spanRange(span));
 }
 
 function flagSpan(stored: StoredProfile, row: number, field: number | null): CellSpan | undefined {
@@ -38,8 +44,15 @@ export async function revealCell(uri: vscode.Uri, stored: StoredProfile, row: nu
     void vscode.window.showInformationMessage(`Assay: record ${row} is no longer in ${uri.path.slice(uri.path.lastIndexOf('/') + 1)}; the file changed.`);
     return undefined;
   }
-  const shown = vscode.window.visibleTextEditors.find((e) => e.document.uri.toString() === uri.toString());
-  const editor = await vscode.window.showTextDocument(doc, { viewColumn: shown?.viewColumn ?? vscode.ViewColumn.One, selection: range, preserveFocus: false });
-  editor.revealRange(range, vscode.TextEditorRevealType.InCenter);
+  await selectInEditor(doc, range);
   return range;
+}
+
+/** Shows the document where it is already visible (else in the first column), selects `range` and centres it. */
+export async function selectInEditor(doc: vscode.TextDocument, range: vscode.Range): Promise<vscode.TextEditor> {
+  const shown = vscode.window.visibleTextEditors.find((e) => e.document.uri.toString() === doc.uri.toString());
+  const editor = await vscode.window.showTextDocument(doc, { viewColumn: shown?.viewColumn ?? vscode.ViewColumn.One, selection: range, preserveFocus: false });
+  editor.selection = new vscode.Selection(range.start, range.end);
+  editor.revealRange(range, vscode.TextEditorRevealType.InCenter);
+  return editor;
 }

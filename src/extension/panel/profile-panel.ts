@@ -26,6 +26,8 @@ export interface PanelDeps {
   worker: WorkerClient;
   config: Configuration;
   log: vscode.LogOutputChannel;
+  /** Writes the whole report as a document and opens it (the panel's "Save report"). */
+  saveReport?(uri: vscode.Uri): Promise<unknown>;
 }
 
 /** Webview options: scripts on, resources only from the extension's dist/ and media/. */
@@ -106,6 +108,16 @@ export class ProfilePanel implements vscode.Disposable {
     this.postCurrent();
   }
 
+  /** The grouped table the panel shows for a column after a re-bin, if any (copies use it). */
+  shownGroupedTable(column: string): GroupedTable | undefined {
+    return this.shownGrouped.get(column);
+  }
+
+  /** A group comparison the panel shows, if any. */
+  shownComparison(numeric: string, by: string): GroupComparison | undefined {
+    return this.shownComparisons.get(`${numeric}\u0000${by}`);
+  }
+
   /** The editor's cursor moved into another column of the shown file: the panel opens it. */
   focusColumn(uri: string, column: string): void {
     if (uri !== this.current || column === this.selectedColumn) return;
@@ -169,6 +181,11 @@ export class ProfilePanel implements vscode.Disposable {
   }
 
   private async copy(m: CopyRequest): Promise<void> {
+    // The protocol's `report` target writes the report as a document rather than copying it.
+    if (m.target === 'report' && this.deps.saveReport !== undefined) {
+      await this.deps.saveReport(vscode.Uri.parse(m.uri));
+      return;
+    }
     const stored = this.deps.store.get(m.uri);
     if (stored === undefined) {
       void vscode.window.showInformationMessage('Assay: that profile is no longer available; open the file again to copy from it.');
@@ -191,6 +208,8 @@ export class ProfilePanel implements vscode.Disposable {
     const uri = this.current;
     if (!this.ready || uri === undefined) return;
     const posted = this.postProfile(uri);
+    // A column chosen from the editor while the page was loading (or hidden) is opened now.
+    if (posted && this.selectedColumn !== null) this.post({ type: 'focus-column', uri, column: this.selectedColumn });
     const busy = this.postProgress(uri);
     const failure = this.deps.store.failure(uri);
     if (!posted && !busy && failure !== undefined) this.post({ type: 'failed', uri, version: failure.version, message: failure.message });

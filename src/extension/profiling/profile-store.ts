@@ -34,6 +34,11 @@ export class ProfileStore {
     return this.profiles.get(uri);
   }
 
+  /** Every stored profile (one per document). */
+  all(): StoredProfile[] {
+    return [...this.profiles.values()];
+  }
+
   /** Job in flight for the document, if any. */
   progress(uri: string): { version: number; fraction: number | null } | undefined {
     return this.busy.get(uri);

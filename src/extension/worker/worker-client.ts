@@ -4,7 +4,7 @@
 import type { BinChoice } from '../../core/options';
 import type { GroupComparison, GroupedTable, Histogram, Profile } from '../../core/profile/types';
 import { isWorkerToHost, transferables } from '../../protocol/worker';
-import type { HostToWorker, WireRecordIndex, WorkerToHost } from '../../protocol/worker';
+import type { HostToWorker, Standing, WireRecordIndex, WorkerToHost } from '../../protocol/worker';
 import type { Disposable } from '../util/disposable-list';
 import type { StartWorker, WorkerPort } from './worker-port';
 
@@ -40,6 +40,7 @@ export interface RunningJob {
 
 export interface BinsReply { version: number; column: string; histogram: Histogram | null; grouped: GroupedTable | null }
 export interface GroupsReply { version: number; comparison: GroupComparison | null }
+export interface StandingReply { version: number; standing: Standing | null }
 
 export interface WorkerClientOptions {
   /** Rebin and group requests fail after this long. */
@@ -101,6 +102,13 @@ export class WorkerClient implements Disposable {
     const id = this.nextId++;
     return this.request<Extract<WorkerToHost, { type: 'groups-result' }>>({ type: 'groups', id, uri, version, numeric, by }, this.options.replyTimeoutMs, false)
       .then((m) => ({ version: m.version, comparison: m.comparison }));
+  }
+
+  /** Where `value` stands in `column` (hovers); `timeoutMs` keeps a hover from waiting behind a long job. */
+  standing(uri: string, version: number, column: string, value: number, timeoutMs = this.options.replyTimeoutMs): Promise<StandingReply> {
+    const id = this.nextId++;
+    return this.request<Extract<WorkerToHost, { type: 'standing-result' }>>({ type: 'standing', id, uri, version, column, value }, timeoutMs, false)
+      .then((m) => ({ version: m.version, standing: m.standing }));
   }
 
   /** The document closed: the worker drops what it kept, and any job for it stops. */

@@ -28,6 +28,7 @@ const hostMessages: HostToWorker[] = [
   { type: 'rebin', id: 4, ...at, column: 'x', bins: { rule: 'count', count: 12 } },
   { type: 'rebin', id: 5, ...at, column: 'x', bins: { rule: 'width', width: 2.5 } },
   { type: 'groups', id: 6, ...at, numeric: 'x', by: 'dataset' },
+  { type: 'standing', id: 8, ...at, column: 'x', value: 245.57 },
   { type: 'cancel', id: 1, ...at },
   { type: 'forget', id: 7, ...at },
 ];
@@ -39,6 +40,8 @@ const workerMessages: WorkerToHost[] = [
   { type: 'bins-result', id: 3, ...at, column: 'x', histogram: { rule: 'sturges', label: 'Sturges, 2 intervals of width 5', edgeMode: 'nice', width: 5, edges: [0, 5, 10], counts: [1, 2] }, grouped: { rule: 'sturges', label: 'Sturges', total: 3, rows: [{ lower: 0, upper: 5, closed: false, count: 1, cumulative: 1, relative: 1 / 3, cumulativeRelative: 1 / 3 }] } },
   { type: 'groups-result', id: 6, ...at, comparison: { numeric: 'x', by: 'dataset', groups: [{ value: 'I', count: 11, mean: 9, sd: null, median: 9, iqr: null }] } },
   { type: 'groups-result', id: 6, ...at, comparison: null },
+  { type: 'standing-result', id: 8, ...at, column: 'x', standing: { below: 7, equal: 1, n: 8, percentile: 93.75 } },
+  { type: 'standing-result', id: 8, ...at, column: 'x', standing: null },
   { type: 'failed', id: 1, ...at, reason: 'cancelled', message: 'worker: the job was cancelled' },
   { type: 'failed', id: 1, ...at, reason: 'error', message: 'x' },
   { type: 'failed', id: 1, ...at, reason: 'no-profile', message: 'x' },
@@ -77,8 +80,8 @@ describe('protocol/worker JSON round trip', () => {
   });
 
   it('every message type has a sample here', () => {
-    expect(new Set(hostMessages.map((m) => m.type))).toEqual(new Set(['profile', 'rebin', 'groups', 'cancel', 'forget']));
-    expect(new Set([...workerMessages, profiled(true)].map((m) => m.type))).toEqual(new Set(['progress', 'profiled', 'bins-result', 'groups-result', 'failed']));
+    expect(new Set(hostMessages.map((m) => m.type))).toEqual(new Set(['profile', 'rebin', 'groups', 'standing', 'cancel', 'forget']));
+    expect(new Set([...workerMessages, profiled(true)].map((m) => m.type))).toEqual(new Set(['progress', 'profiled', 'bins-result', 'groups-result', 'standing-result', 'failed']));
   });
 });
 
@@ -100,6 +103,8 @@ describe('protocol/worker guards', () => {
     ['a zero bin count', { type: 'rebin', id: 1, ...at, column: 'x', bins: { rule: 'count', count: 0 } }],
     ['an unknown input kind', { ...hostMessages[0], input: { kind: 'socket' } }],
     ['a zero chunk size', { ...hostMessages[0], chunkBytes: 0 }],
+    ['a standing of a value that is not finite', { type: 'standing', id: 1, ...at, column: 'x', value: Infinity }],
+    ['a standing of a string value', { type: 'standing', id: 1, ...at, column: 'x', value: '3' }],
   ])('host → worker refuses %s', (_what, m) => {
     expect(isHostToWorker(m)).toBe(false);
   });
@@ -108,6 +113,7 @@ describe('protocol/worker guards', () => {
     ['an unknown failure reason', { type: 'failed', id: 1, ...at, reason: 'oops', message: 'x' }],
     ['a profiled index of plain arrays', { ...profiled(true), index: { offsets: [1], lines: [1] } }],
     ['a progress without totalBytes', { type: 'progress', id: 1, ...at, bytesRead: 1 }],
+    ['a standing without its counts', { type: 'standing-result', id: 1, ...at, column: 'x', standing: { percentile: 50 } }],
   ])('worker → host refuses %s', (_what, m) => {
     expect(isWorkerToHost(m)).toBe(false);
   });

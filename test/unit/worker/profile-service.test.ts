@@ -123,6 +123,19 @@ describe('ProfileService', () => {
     expect((await until((m) => m.id === 6)).m).toMatchObject({ type: 'failed', reason: 'no-profile' });
   });
 
+  it('answers where a value stands from the kept session (uranium: 245.57 is the largest of 8)', async () => {
+    const { s, until } = service();
+    // Tietjen & Moore (1972), the e-Handbook's Grubbs example (test/workbench/fixtures/uranium.csv).
+    const uranium = readFileSync(join(__dirname, '../../workbench/fixtures/uranium.csv'), 'utf8');
+    s.handle(profileRequest(1, uranium));
+    await until((m) => m.id === 1 && m.type === 'profiled');
+    s.handle({ type: 'standing', id: 2, uri, version: 1, column: 'x', value: 245.57 });
+    // Mid-rank percentile 100 (7 + 1/2) / 8 = 93.75 (the session's documented definition).
+    expect((await until((m) => m.id === 2)).m).toMatchObject({ type: 'standing-result', column: 'x', standing: { below: 7, equal: 1, n: 8, percentile: 93.75 } });
+    s.handle({ type: 'standing', id: 3, uri, version: 1, column: 'nope', value: 1 });
+    expect((await until((m) => m.id === 3)).m).toMatchObject({ type: 'standing-result', standing: null });
+  });
+
   it('answers a malformed request with a failure when it can address one, and ignores it otherwise', async () => {
     const { s, out } = service();
     s.handle({ type: 'profile', id: 9, uri, version: 1 });

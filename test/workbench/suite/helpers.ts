@@ -97,3 +97,24 @@ export async function closePanel(): Promise<void> {
   const tab = panelTab();
   if (tab !== undefined) await vscode.window.tabGroups.close(tab);
 }
+
+/** Waits for the exact (not first-pass) profile of the document's current version. */
+export async function exactProfile(doc: vscode.TextDocument) {
+  const api = await assayApi();
+  return waitFor(`the profile of ${doc.uri.path} at version ${doc.version}`, () => {
+    const p = api.profileFor(doc.uri.toString());
+    return p !== undefined && p.version === doc.version && !p.partial ? p : undefined;
+  });
+}
+
+/** Copies a fixture to a new name in the workspace (tests that edit a file work on their own copy). */
+export async function copyFixture(name: string, to: string): Promise<vscode.Uri> {
+  const target = fixtureUri(to);
+  await vscode.workspace.fs.copy(fixtureUri(name), target, { overwrite: true });
+  return target;
+}
+
+/** [line, character, line, character] of a range (0-based), for readable comparisons. */
+export function rangeOf(r: vscode.Range): number[] {
+  return [r.start.line, r.start.character, r.end.line, r.end.character];
+}

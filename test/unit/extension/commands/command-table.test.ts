@@ -2,7 +2,7 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { COMMAND_CATEGORY, COMMANDS, DATA_FILE_WHEN } from '../../../../src/extension/commands/command-table';
+import { COMMAND_CATEGORY, COMMANDS, DATA_EDITOR_WHEN, DATA_FILE_WHEN, PROFILE_WHEN } from '../../../../src/extension/commands/command-table';
 import type { CommandSpec } from '../../../../src/extension/commands/command-table';
 import { DATA_LANGUAGES } from '../../../../src/extension/data-files';
 
@@ -11,6 +11,7 @@ interface Manifest {
   contributes: {
     commands: { command: string; title: string; category: string; icon?: string }[];
     menus: Record<string, { command: string; when?: string; group?: string }[]>;
+    keybindings: { command: string; key: string; mac: string; when: string }[];
     languages: { id: string; extensions: string[] }[];
   };
 }
@@ -27,6 +28,15 @@ describe('command table and package.json', () => {
   it('puts the editor-title buttons on data files only, and limits palette entries as the table says', () => {
     expect(pkg.contributes.menus['editor/title']).toEqual(table.filter((c) => c.editorTitle).map((c) => ({ command: c.id, when: DATA_FILE_WHEN, group: 'navigation' })));
     expect(pkg.contributes.menus.commandPalette).toEqual(table.filter((c) => c.palette !== undefined).map((c) => ({ command: c.id, when: c.palette })));
+  });
+
+  it('binds the default keys of the table, only while a data file\'s editor has the keyboard', () => {
+    expect(pkg.contributes.keybindings).toEqual(table.filter((c) => c.keys !== undefined).map((c) => ({ command: c.id, key: c.keys!.key, mac: c.keys!.mac, when: DATA_EDITOR_WHEN })));
+    expect(DATA_EDITOR_WHEN).toBe(`editorTextFocus && editorLangId =~ /^(${DATA_LANGUAGES.join('|')})$/`);
+    expect(PROFILE_WHEN.startsWith(`${DATA_FILE_WHEN} || `)).toBe(true);
+    // Two commands never share keys.
+    const keys = pkg.contributes.keybindings.flatMap((k) => [k.key, `mac:${k.mac}`]);
+    expect(new Set(keys).size).toBe(keys.length);
   });
 
   it('the data-file when clause, the contributed languages and the activation events name the same languages', () => {

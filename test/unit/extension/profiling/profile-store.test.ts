@@ -26,6 +26,7 @@ describe('ProfileStore', () => {
     expect(store.failure(uri)).toEqual({ version: 2, message: 'boom' });
     store.set(stored(false, 3));
     expect(store.failure(uri)).toBeUndefined();
+    expect(store.all().map((s) => [s.uri, s.version])).toEqual([[uri, 3]]);
     store.setProgress(uri, 4, null);
     store.clearProgress(uri);
     store.clearProgress(uri);

@@ -81,6 +81,15 @@ describe('WorkerClient', () => {
     await expect(b).resolves.toEqual({ version: 1, comparison: null });
   });
 
+  it('asks where a value stands and resolves with the reply', async () => {
+    const p = client.standing('file:///a.csv', 1, 'x', 245.57);
+    const w = workers[0]!;
+    const sent = w.sent[0] as Extract<HostToWorker, { type: 'standing' }>;
+    expect(sent).toMatchObject({ type: 'standing', column: 'x', value: 245.57 });
+    w.reply({ type: 'standing-result', id: sent.id, uri: sent.uri, version: 1, column: 'x', standing: { below: 7, equal: 1, n: 8, percentile: 93.75 } });
+    await expect(p).resolves.toEqual({ version: 1, standing: { below: 7, equal: 1, n: 8, percentile: 93.75 } });
+  });
+
   it('rejects with the worker\'s reason on a failed reply', async () => {
     const p = client.rebin('file:///a.csv', 1, 'x', { rule: 'sturges' });
     const id = workers[0]!.sent[0]!.id;
