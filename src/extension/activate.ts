@@ -104,6 +104,7 @@ export function activateAssay(context: vscode.ExtensionContext, platform: Platfo
     'assay.copyFlags': (args) => copies.run('flags', args),
     'assay.saveReport': (args) => reports.save('markdown', args),
     'assay.saveHtmlReport': (args) => reports.save('html', args),
+    'assay.writeMetadata': (args) => reports.save('metadata', args),
   })) extension.add(d);
 
   onActive();

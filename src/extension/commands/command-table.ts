@@ -46,6 +46,7 @@ export const COMMANDS = [
   { id: 'assay.copyFlags', title: 'Copy Flags as Markdown', palette: PROFILE_WHEN },
   { id: 'assay.saveReport', title: 'Save Report as Markdown...', palette: PROFILE_WHEN },
   { id: 'assay.saveHtmlReport', title: 'Save Report as HTML...', palette: PROFILE_WHEN },
+  { id: 'assay.writeMetadata', title: 'Write CSV on the Web Metadata from the Profile...', palette: PROFILE_WHEN },
 ] as const satisfies readonly CommandSpec[];
 
 export type CommandId = (typeof COMMANDS)[number]['id'];

@@ -1,9 +1,10 @@
 // Where a saved report goes by default: beside the data file, named after it, never the data file
 // itself. Pure (paths as URI paths, '/'-separated).
 
-export type ReportFormat = 'markdown' | 'html';
+/** `metadata` is a CSV on the Web metadata document written from the profile (a starting point). */
+export type ReportFormat = 'markdown' | 'html' | 'metadata';
 
-export const REPORT_EXTENSIONS: Record<ReportFormat, string> = { markdown: 'md', html: 'html' };
+export const REPORT_EXTENSIONS: Record<ReportFormat, string> = { markdown: 'md', html: 'html', metadata: 'json' };
 
 /**
  * The report's path beside the data file: the data file's name without its extension, plus
@@ -13,6 +14,8 @@ export function reportPath(dataPath: string, format: ReportFormat): string {
   const slash = dataPath.lastIndexOf('/');
   const dir = dataPath.slice(0, slash + 1);
   const name = dataPath.slice(slash + 1);
+  // Where the W3C "Model for Tabular Data" §5 looks for a file's metadata: FILE-metadata.json.
+  if (format === 'metadata') return `${dir}${name || 'data'}-metadata.json`;
   const dot = name.lastIndexOf('.');
   const stem = dot > 0 ? name.slice(0, dot) : name || 'data';
   return `${dir}${stem}-profile.${REPORT_EXTENSIONS[format]}`;

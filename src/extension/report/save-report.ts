@@ -2,6 +2,7 @@
 // `--format markdown`) or the self-contained HTML report, beside the data file or where the user
 // picks, never over the data file; the saved report is then opened in an editor.
 import * as vscode from 'vscode';
+import { metadataFromProfile } from '../../core/csvw/metadata-from-profile';
 import { renderHtmlReport } from '../../core/html';
 import { renderReport } from '../../core/markdown';
 import { objectArgument, uriArgument } from '../commands/command-args';
@@ -21,7 +22,10 @@ export interface ReportDeps {
 const FILTERS: Record<ReportFormat, Record<string, string[]>> = {
   markdown: { Markdown: [REPORT_EXTENSIONS.markdown] },
   html: { HTML: [REPORT_EXTENSIONS.html] },
+  metadata: { 'CSV on the Web metadata': [REPORT_EXTENSIONS.metadata] },
 };
+
+const TITLES: Record<ReportFormat, string> = { markdown: 'Markdown report', html: 'HTML report', metadata: 'CSV on the Web metadata' };
 
 export class ReportSaver {
   constructor(private readonly deps: ReportDeps) {}
@@ -38,8 +42,8 @@ export class ReportSaver {
     const to = uriArgument(objectArgument(raw).to) ?? await vscode.window.showSaveDialog({
       defaultUri: beside,
       filters: FILTERS[format],
-      saveLabel: 'Save Report',
-      title: `Assay: save the ${format === 'html' ? 'HTML' : 'Markdown'} report of ${vscode.workspace.asRelativePath(data)}`,
+      saveLabel: format === 'metadata' ? 'Write Metadata' : 'Save Report',
+      title: `Assay: save the ${TITLES[format]} of ${vscode.workspace.asRelativePath(data)}`,
     });
     if (to === undefined) return undefined;
     if (isSameFile(to, data)) {
@@ -48,11 +52,14 @@ export class ReportSaver {
     }
     const settings = this.deps.config.settings;
     const options = { fileLabel: vscode.workspace.asRelativePath(data), significantDigits: settings.significantDigits, rules: settings.options.rules };
-    const text = format === 'html' ? renderHtmlReport(stored.profile, options) : renderReport(stored.profile, options);
+    const dataName = data.path.slice(data.path.lastIndexOf('/') + 1);
+    const text = format === 'html' ? renderHtmlReport(stored.profile, options)
+      : format === 'metadata' ? metadataFromProfile(stored.profile, { url: dataName })
+      : renderReport(stored.profile, options);
     await vscode.workspace.fs.writeFile(to, new TextEncoder().encode(text));
     const doc = await vscode.workspace.openTextDocument(to);
     await vscode.window.showTextDocument(doc, { preview: false, viewColumn: vscode.ViewColumn.Active });
-    vscode.window.setStatusBarMessage(`$(check) Assay: saved the report to ${vscode.workspace.asRelativePath(to)}`, 4000);
+    vscode.window.setStatusBarMessage(`$(check) Assay: saved the ${TITLES[format]} to ${vscode.workspace.asRelativePath(to)}`, 4000);
     return to;
   }
 }

@@ -10,6 +10,7 @@ import { renderCopy } from '../../../src/extension/copy/render-copy';
 import type { CopyRequestLike } from '../../../src/extension/copy/render-copy';
 import { deepEqual, equal, ok } from './expect';
 import { assayApi, closeAllEditors, exactProfile, fixtureUri, openFixture, sleep, waitFor } from './helpers';
+import { parseMetadata } from '../../../src/core/csvw/parse-metadata';
 
 const rules = resolveOptions({}).rules;
 
@@ -94,6 +95,21 @@ suite('copy and report', () => {
     ok(!/<script/i.test(html), 'no script element');
     ok(html.includes("default-src 'none'"), 'the CSP forbids every load');
     ok(/<svg/.test(html), 'charts as inline SVG');
+  });
+
+  test('metadata written from the profile is valid CSV on the Web metadata that the file satisfies', async () => {
+    const editor = await openFixture('anscombe.csv');
+    await exactProfile(editor.document);
+    const to = fixtureUri('anscombe.csv-metadata.json');
+    const saved = await vscode.commands.executeCommand<vscode.Uri | undefined>('assay.writeMetadata', { to: to.toString() });
+    equal(saved?.toString(), to.toString(), 'where the metadata went');
+    const text = new TextDecoder().decode(await vscode.workspace.fs.readFile(to));
+    const doc = JSON.parse(text) as { url: string; tableSchema: { columns: { titles: string }[] } };
+    equal(doc.url, 'anscombe.csv', 'the url names the data file');
+    equal(doc.tableSchema.columns.map((c) => c.titles).join(','), 'dataset,x,y', 'one description per column');
+    const parsed = parseMetadata(text, to.toString());
+    equal(parsed.errors.filter((e) => e.severity === 'error').length, 0, 'no metadata errors');
+    await vscode.workspace.fs.delete(to);
   });
 
   test('a report never overwrites the data file', async () => {
