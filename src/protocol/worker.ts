@@ -69,6 +69,8 @@ export type HostToWorker =
       firstPass: number | null;
       /** Bytes per chunk fed to the engine; the worker checks for cancellation between chunks. */
       chunkBytes: number;
+      /** CSV on the Web metadata the host found for the file (already read), or null. */
+      metadata?: { text: string; location: string } | null;
     })
   | (Addressed & { type: 'rebin'; column: string; bins: BinChoice })
   | (Addressed & { type: 'groups'; numeric: string; by: string })
@@ -156,6 +158,8 @@ export function isHostToWorker(m: unknown): m is HostToWorker {
   if (m.type === 'profile') {
     if (!isInput(m.input) || !isRecord(m.options) || !isBinChoice(m.options.bins)) return false;
     if (!((m.chunkBytes as number) >= 1)) return false;
+    const meta = m.metadata;
+    if (meta !== undefined && meta !== null && !(isRecord(meta) && typeof meta.text === 'string' && typeof meta.location === 'string')) return false;
   }
   if (m.type === 'rebin' && !isBinChoice(m.bins)) return false;
   if (m.type === 'standing' && !Number.isFinite(m.value)) return false;

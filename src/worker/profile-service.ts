@@ -92,7 +92,7 @@ export class ProfileService {
       const options = fromWireOptions(req.options, null);
       source = this.open(req);
       const size = source.size;
-      const jobSource = { name: req.name, size };
+      const jobSource = { name: req.name, size, ...(req.metadata ? { metadata: req.metadata } : {}) };
       const exact = createProfileJob(options, jobSource);
       let first: ProfileJob | null = req.firstPass !== null && req.firstPass > 0
         ? createProfileJob(fromWireOptions(req.options, req.firstPass), jobSource) : null;

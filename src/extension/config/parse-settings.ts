@@ -3,6 +3,7 @@
 // built with the core's resolveOptions. Pure (no `vscode`), so it is unit-tested directly.
 import { OptionError, resolveOptions } from '../../core/options';
 import type { BinChoice, ProfileOptions, RuleId } from '../../core/options';
+import type { Level } from '../../core/profile/types';
 import { toWireOptions } from '../../protocol/worker';
 import type { WireOptions } from '../../protocol/worker';
 import { SETTINGS } from './settings-table';
@@ -18,6 +19,8 @@ export interface AssaySettings {
   readonly largeFileAboveBytes: number;
   readonly maxDiagnostics: number;
   readonly significantDigits: number;
+  /** A CSV on the Web metadata file to use (workspace-relative or absolute); '' looks beside each data file. */
+  readonly metadataPath: string;
 }
 
 export interface ParsedSettings {
@@ -57,6 +60,7 @@ export function parseSettings(get: (key: string) => unknown): ParsedSettings {
       delimiter: v('delimiter') as string | null,
       missingTokens: v('missingTokens') as string[],
       topN: v('topN') as number,
+      levels: v('levels') as Record<string, Level>,
       rules: {
         enabled: v('rules.enabled') as RuleId[],
         tukeyK: v('rules.tukeyK') as number,
@@ -84,6 +88,7 @@ export function parseSettings(get: (key: string) => unknown): ParsedSettings {
     largeFileAboveBytes: v('largeFile.aboveBytes') as number,
     maxDiagnostics: v('diagnostics.max') as number,
     significantDigits: v('significantDigits') as number,
+    metadataPath: v('metadata.path') as string,
   });
   return { settings, problems };
 }

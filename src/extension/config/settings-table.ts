@@ -54,6 +54,19 @@ function delimiter(v: unknown) {
   return typeof v === 'string' && [...v].length === 1 ? ok(v) : bad('one character, "tab", or empty to detect');
 }
 
+const LEVELS = ['nominal', 'ordinal', 'interval', 'ratio'];
+
+function levelMap(v: unknown) {
+  if (typeof v !== 'object' || v === null || Array.isArray(v)) return bad('an object of column names to nominal, ordinal, interval or ratio');
+  const entries = Object.entries(v as Record<string, unknown>);
+  const wrong = entries.filter(([, l]) => typeof l !== 'string' || !LEVELS.includes(l));
+  return wrong.length === 0 ? ok(Object.fromEntries(entries)) : bad(`levels from: ${LEVELS.join(', ')} (not: ${wrong.map(([k]) => k).join(', ')})`);
+}
+
+function text(v: unknown) {
+  return typeof v === 'string' ? ok(v.trim()) : bad('a path, or empty');
+}
+
 export const SETTINGS: readonly SettingSpec[] = [
   { key: 'bins', default: 'fd', check: bins, need: 'reprofile' },
   { key: 'binEdges', default: 'nice', check: oneOf(['nice', 'exact']), need: 'reprofile' },
@@ -76,4 +89,6 @@ export const SETTINGS: readonly SettingSpec[] = [
   { key: 'largeFile.aboveBytes', default: 52_428_800, check: number(0, Infinity, true), need: 'reprofile' },
   { key: 'diagnostics.max', default: 1000, check: number(0, 1_000_000, true), need: 'diagnostics' },
   { key: 'significantDigits', default: 4, check: number(1, 15, true), need: 'render' },
+  { key: 'levels', default: {}, check: levelMap, need: 'reprofile' },
+  { key: 'metadata.path', default: '', check: text, need: 'reprofile' },
 ];

@@ -10,6 +10,7 @@ import { baseName } from '../data-files';
 import type { Platform } from '../platform';
 import type { HostProfileResult, RunningJob, WorkerClient } from '../worker/worker-client';
 import { WorkerRequestError } from '../worker/worker-client';
+import { findMetadata } from './find-metadata';
 import type { ProfileStore } from './profile-store';
 
 const EDIT_DEBOUNCE_MS = 300;
@@ -48,6 +49,11 @@ export class DocumentProfiler implements vscode.Disposable {
       vscode.workspace.onDidCloseTextDocument((d) => this.untrack(d.uri)),
       config.onDidChange((c) => {
         if (c.needs.has('reprofile')) for (const t of this.tracked.values()) void this.run(t);
+      }),
+      // Saved metadata changes what is declared: profile again the files it may apply to.
+      vscode.workspace.onDidSaveTextDocument((d) => {
+        if (!/(-metadata|^csv-metadata)\.json$/.test(baseName(d.uri.path))) return;
+        for (const t of this.tracked.values()) void this.run(t);
       }),
     );
   }
@@ -148,11 +154,14 @@ export class DocumentProfiler implements vscode.Disposable {
           if (stale() || token?.isCancellationRequested) return null;
           input = { kind: 'bytes', bytes };
         }
+        const metadata = await findMetadata(t.uri, settings.metadataPath);
+        if (stale() || token?.isCancellationRequested) return null;
         this.store.setProgress(key, version, 0);
         const job = this.worker.profile({
           uri: key, version, name: baseName(t.uri.path), size, options: settings.wire, input,
           firstPass: size > settings.firstPassAboveBytes ? settings.firstPassRecords : null,
           chunkBytes: CHUNK_BYTES,
+          metadata,
         }, {
           onProgress: (read, total) => {
             if (stale()) return;
