@@ -2,12 +2,13 @@
 // Exit codes: 0 done; 1 a --fail-on condition was met; 2 unreadable input or bad options.
 import { closeSync, createReadStream, existsSync, openSync, readFileSync, readSync, statSync } from 'node:fs';
 import { basename, dirname, join } from 'node:path';
-import { createProfileJob } from '../core/engine';
+import { createProfileJob, type JobSource, type ProfileResult } from '../core/engine';
 import { failOnReasons, type FailOn } from '../core/fail-on';
 import { renderReport } from '../core/markdown';
-import { OptionError, parseBinChoice, resolveOptions, ALL_RULES, type ProfileOptionsInput, type RuleId } from '../core/options';
+import { OptionError, parseBinChoice, resolveOptions, ALL_RULES, type ProfileOptions, type ProfileOptionsInput, type RuleId } from '../core/options';
 import type { Profile } from '../core/profile/types';
 import { renderText } from '../core/text/render-text';
+import { defaultWorkers, profileFileInWorkers, runWorkerIfAsked } from './parallel';
 import { parseArgs, USAGE } from './parse-args';
 
 const CHUNK = 1 << 20; // 1 MiB reads: the default 64 KiB stream chunk is 2-3x slower to scan
@@ -71,8 +72,46 @@ async function main(argv: string[]): Promise<number> {
     return fail(e instanceof Error ? e.message : String(e));
   }
 
-  const job = createProfileJob(options, { name: basename(file), size, metadata });
+  const source = { name: basename(file), size, metadata };
   const progress = process.stderr.isTTY && !args.quiet ? new Progress(size) : null;
+  let result: ProfileResult | null = null;
+  const workers = args.workers ?? defaultWorkers(size);
+  if (workers > 1) {
+    try {
+      const r = await profileFileInWorkers(file, size, options, source, workers, (bytes) => progress?.update(bytes));
+      if ('fallback' in r) {
+        if (args.workers !== undefined && !args.quiet) process.stderr.write(`assay: reading in one thread (${r.fallback})\n`);
+      } else result = r;
+    } catch (e) {
+      progress?.done();
+      return fail(`${file}: cannot be read (${(e as Error).message})`);
+    }
+  }
+  try {
+    if (result === null) {
+      const r = await profileStreaming(file, size, options, source, progress);
+      if (typeof r === 'string') return fail(r);
+      result = r;
+    }
+    progress?.done();
+    const { profile } = result;
+    write(profile, args.format, file, args.significantDigits);
+    if (args.failOn.length > 0) {
+      const reasons = failOnReasons(profile, args.failOn as FailOn[]);
+      if (reasons.length > 0) {
+        process.stderr.write(`assay: ${reasons.join('; ')}\n`);
+        return 1;
+      }
+    }
+    return 0;
+  } catch (e) {
+    return fail(`${file}: ${(e as Error).message}`);
+  }
+}
+
+/** Streams the file through one job in this thread; a one-line error message when it cannot be read. */
+async function profileStreaming(file: string, size: number, options: ProfileOptions, source: JobSource, progress: Progress | null): Promise<ProfileResult | string> {
+  const job = createProfileJob(options, source);
   try {
     const stream = createReadStream(file, { highWaterMark: CHUNK });
     for await (const chunk of stream) {
@@ -85,37 +124,23 @@ async function main(argv: string[]): Promise<number> {
     }
   } catch (e) {
     progress?.done();
-    return fail(`${file}: cannot be read (${(e as Error).message})`);
+    return `${file}: cannot be read (${(e as Error).message})`;
   }
   progress?.done();
-
-  let fd = -1;
+  const fd = openSync(file, 'r');
   try {
-    fd = openSync(file, 'r');
-    const handle = fd;
-    const { profile } = job.finish((offset, length) => {
+    return job.finish((offset, length) => {
       const buf = new Uint8Array(Math.max(0, Math.min(length, size - offset)));
       let got = 0;
       while (got < buf.length) {
-        const n = readSync(handle, buf, got, buf.length - got, offset + got);
+        const n = readSync(fd, buf, got, buf.length - got, offset + got);
         if (n === 0) break;
         got += n;
       }
       return buf.subarray(0, got);
     });
-    write(profile, args.format, file, args.significantDigits);
-    if (args.failOn.length > 0) {
-      const reasons = failOnReasons(profile, args.failOn as FailOn[]);
-      if (reasons.length > 0) {
-        process.stderr.write(`assay: ${reasons.join('; ')}\n`);
-        return 1;
-      }
-    }
-    return 0;
-  } catch (e) {
-    return fail(`${file}: ${(e as Error).message}`);
   } finally {
-    if (fd >= 0) closeSync(fd);
+    closeSync(fd);
   }
 }
 
@@ -174,7 +199,8 @@ function fail(message: string): number {
   return 2;
 }
 
-main(process.argv.slice(2)).then(
+// The same bundle runs the range workers (see parallel.ts); only the main thread reads the command line.
+if (!runWorkerIfAsked()) main(process.argv.slice(2)).then(
   (code) => {
     process.exitCode = code;
   },

@@ -20,6 +20,8 @@ export interface CliArgs {
   maxFlags?: number;
   maxRecords?: number;
   significantDigits?: number;
+  /** Worker threads; undefined: 1 below 64 MB, else min(2, cores). */
+  workers?: number;
   quiet: boolean;
   help: boolean;
   version: boolean;
@@ -55,6 +57,8 @@ Flags and constraints
   --no-metadata                 do not look for metadata beside the file
   --fail-on LIST                exit 1 when any of: flags, invalid, constraints
 Other
+  --workers N                   threads that profile byte ranges of a UTF-8 file in parallel
+                                (default: 1 below 64 MB, else 2 when the machine has 2 cores)
   -q, --quiet                   no progress on stderr
   -h, --help, --version
 
@@ -121,6 +125,7 @@ export function parseArgs(argv: string[]): CliArgs {
       case '--max-flags': a.maxFlags = whole('--max-flags', value(), 1); break;
       case '--max-records': a.maxRecords = whole('--max-records', value(), 1); break;
       case '--significant-digits': a.significantDigits = whole('--significant-digits', value(), 1); break;
+      case '--workers': a.workers = whole('--workers', value(), 1); break;
       case '--missing': a.missing = ['', ...value().split(',')]; break;
       default:
         if (word.startsWith('-') && word !== '-') throw new Error(`${word}: unknown option (try --help)`);

@@ -1,6 +1,7 @@
 // The one options object the core receives. Shells (CLI flags, extension settings) build it with
 // `resolveOptions`, which validates and freezes; the core never reads settings itself.
 import type { ColumnType, EncodingName, Level } from './profile/types';
+import { dialectCharProblem } from './read/byte-dialect';
 
 export type BinRuleId = 'sqrt' | 'sturges' | 'rice' | 'doane' | 'scott' | 'fd' | 'auto';
 /** A named rule, a fixed number of bins, or a fixed width. */
@@ -128,9 +129,12 @@ export function resolveOptions(input: ProfileOptionsInput = {}): ProfileOptions 
     maxFlagsPerRule: positive('maxFlagsPerRule', r.maxFlagsPerRule ?? 1000, true),
   });
   const delimiter = input.delimiter ?? null;
-  if (delimiter !== null && [...delimiter].length !== 1) throw new OptionError(`delimiter: expected one character, got "${delimiter}"`);
+  const delimiterProblem = delimiter === null ? null : dialectCharProblem('delimiter', delimiter);
+  if (delimiterProblem !== null) throw new OptionError(delimiterProblem);
   const quote = input.quote ?? null;
-  if (quote !== null && [...quote].length !== 1) throw new OptionError(`quote: expected one character, got "${quote}"`);
+  const quoteProblem = quote === null ? null : dialectCharProblem('quote', quote);
+  if (quoteProblem !== null) throw new OptionError(quoteProblem);
+  if (delimiter !== null && delimiter === quote) throw new OptionError(`delimiter and quote: they must differ, got "${delimiter}" for both`);
   const quantileType = input.quantileType ?? 7;
   if (!Number.isInteger(quantileType) || quantileType < 1 || quantileType > 9) {
     throw new OptionError(`quantileType: expected a Hyndman & Fan type from 1 to 9, got ${quantileType}`);
@@ -149,11 +153,18 @@ export function resolveOptions(input: ProfileOptionsInput = {}): ProfileOptions 
     maxDistinct: positive('maxDistinct', input.maxDistinct ?? 100_000, true),
     maxSortedDistinct: positive('maxSortedDistinct', input.maxSortedDistinct ?? 1000, true),
     groupBy: Object.freeze([...(input.groupBy ?? [])]),
-    types: Object.freeze({ ...(input.types ?? {}) }),
-    levels: Object.freeze({ ...(input.levels ?? {}) }),
+    // No prototype: a column named "constructor" or "valueOf" must not find Object's members.
+    types: Object.freeze(Object.assign(Object.create(null) as Record<string, ColumnType>, input.types)),
+    levels: Object.freeze(Object.assign(Object.create(null) as Record<string, Level>, input.levels)),
     rules,
     maxRecords: input.maxRecords ?? null,
   };
+  for (const [column, level] of Object.entries(options.levels)) {
+    if (!['nominal', 'ordinal', 'interval', 'ratio'].includes(level)) throw new OptionError(`levels: "${column}" must be nominal, ordinal, interval or ratio, got "${String(level)}"`);
+  }
+  for (const [column, type] of Object.entries(options.types)) {
+    if (!['integer', 'decimal', 'boolean', 'date', 'datetime', 'text'].includes(type)) throw new OptionError(`types: "${column}" must be integer, decimal, boolean, date, datetime or text, got "${String(type)}"`);
+  }
   if (options.edges !== 'nice' && options.edges !== 'exact') throw new OptionError(`edges: expected nice or exact, got "${String(options.edges)}"`);
   return Object.freeze(options);
 }

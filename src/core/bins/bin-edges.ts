@@ -57,7 +57,7 @@ const show = (w: number): string => String(Number(w.toPrecision(6)));
  */
 function representable(min: number, max: number, w: DecimalWidth): DecimalWidth {
   const size = Math.max(Math.abs(min), Math.abs(max));
-  return size / w.width > 2 ** 50 ? (niceWidth(size / 2 ** 50) as DecimalWidth) : w;
+  return size / w.width > 2 ** 50 ? (niceWidth(size / 2 ** 50) ?? w) : w;
 }
 
 /** The multiples j0·w ≤ min (the largest such) and j1·w > max (the smallest such). */
@@ -132,6 +132,9 @@ export function binEdges(sorted: Float64Array, choice: BinChoice, mode: 'nice' |
   }
 
   const range = max - min;
+  // Values spanning more than the double range (1e308 - -1e308), or only a few subnormals, leave
+  // no representable width: no histogram rather than NaN edges.
+  if (!Number.isFinite(range) || !(range / maxBins > 0)) return null;
   // The raw width, the rule that gave it, and how the label names it.
   let rule: string = choice.rule;
   let name: string;
@@ -158,6 +161,8 @@ export function binEdges(sorted: Float64Array, choice: BinChoice, mode: 'nice' |
       notes.push('widened to 1 for whole numbers');
     }
   }
+
+  if (!(width > 0) || !Number.isFinite(width)) return null; // underflow of range / count
 
   if (mode === 'exact') {
     const fixedWidth = choice.rule === 'width';
@@ -186,8 +191,9 @@ export function binEdges(sorted: Float64Array, choice: BinChoice, mode: 'nice' |
     return { rule, label, width: actual, edges, edgeMode: mode };
   }
 
-  let w = choice.rule === 'width' ? (decimalWidth(width) ?? { width, integer: NaN, exponent: 0 }) : (niceWidth(width) as DecimalWidth);
-  w = representable(min, max, w);
+  const first = choice.rule === 'width' ? (decimalWidth(width) ?? { width, integer: NaN, exponent: 0 }) : niceWidth(width);
+  if (first === null || !(first.width > 0)) return null; // a width too small for a decimal form
+  let w = representable(min, max, first);
   let span = niceSpan(min, max, w);
   const wanted = span.j1 - span.j0;
   if (wanted > maxBins) {

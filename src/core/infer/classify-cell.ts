@@ -1,8 +1,9 @@
 // One cell's kind, as a small integer so that a column can keep one byte per row. The column's
 // type is decided only at the end, from all kinds seen; the per-row kinds then say which cells
 // fit and which are invalid, without keeping the cells' text.
-import { parseDate } from './parse-date';
+import { checkCalendar, daysFromCivil, parseDate } from './parse-date';
 import { parseNumber } from './parse-number';
+import { NUM_DECIMAL, NUM_NONE, NUM_PLAIN_INTEGER, parseNumberBytes } from './parse-number-bytes';
 
 export const KIND_ABSENT = 0; // the record had no such field (short ragged row)
 export const KIND_INTEGER = 1;
@@ -29,6 +30,9 @@ export interface CellReading {
   value: number;
 }
 
+const DAY_MS = 86_400_000;
+const decoder = new TextDecoder();
+
 const TRUE_WORDS = new Set(['true', 'yes']);
 const FALSE_WORDS = new Set(['false', 'no']);
 
@@ -50,12 +54,108 @@ export function unpackSlash(v: number): { first: number; second: number; year: n
 
 export class CellClassifier {
   private readonly tokens: Map<string, number>;
+  /** The tokens as UTF-8 bytes, by byte length, with their numbers (first listing wins). */
+  private readonly tokenBytes: { bytes: Uint8Array; token: number }[][] = [];
+  private readonly emptyToken: number;
 
   constructor(missingTokens: readonly string[], private readonly decimalSeparator: '.' | ',') {
     this.tokens = new Map();
     missingTokens.forEach((t, i) => {
       if (!this.tokens.has(t)) this.tokens.set(t, Math.min(i, MAX_TOKENS - 1));
     });
+    const encoder = new TextEncoder();
+    for (const [t, token] of this.tokens) {
+      const bytes = encoder.encode(t);
+      (this.tokenBytes[bytes.length] ??= []).push({ bytes, token });
+    }
+    this.emptyToken = this.tokens.get('') ?? -1;
+  }
+
+  /**
+   * `classify` on the UTF-8 bytes `bytes[start, end)` of the cell's value (quotes already removed
+   * and doubled quotes collapsed): the same reading, without a string for the common cells (plain
+   * numbers, ISO dates, missing tokens, short words). Cells with whitespace or non-ASCII bytes at
+   * either end, and the rarer forms, are decoded and read by `classify`.
+   * Returns true when the bytes are the one spelling of an integer or date that `out.value` has (no
+   * sign `+`, no leading zero; `YYYY-MM-DD`), so that a caller may key such cells by value.
+   */
+  classifyBytes(bytes: Uint8Array, start: number, end: number, out: CellReading): boolean {
+    const n = end - start;
+    if (n === 0) {
+      if (this.emptyToken >= 0) {
+        out.kind = KIND_MISSING + this.emptyToken;
+        out.value = NaN;
+      } else {
+        out.kind = KIND_TEXT;
+        out.value = NaN;
+      }
+      return false;
+    }
+    const c = bytes[start]!;
+    const last = bytes[end - 1]!;
+    // Spaces (ASCII or not) decide trimming; leave those cells to the text path.
+    if (c === 32 || c === 9 || c >= 0x80 || last === 32 || last === 9 || last >= 0x80) {
+      this.classify(decodeBytes(bytes, start, end), out);
+      return false;
+    }
+    const candidates = this.tokenBytes[n];
+    if (candidates !== undefined) {
+      for (const t of candidates) {
+        if (sameBytes(bytes, start, t.bytes)) {
+          out.kind = KIND_MISSING + t.token;
+          out.value = NaN;
+          return false;
+        }
+      }
+    }
+    if ((c >= 48 && c <= 57) || c === 43 || c === 45 || c === 46 || c === 44) {
+      const num = parseNumberBytes(bytes, start, end, this.decimalSeparator, out);
+      if (num !== NUM_NONE) {
+        if (num === NUM_DECIMAL) {
+          out.kind = KIND_DECIMAL;
+          return false;
+        }
+        out.kind = KIND_INTEGER;
+        if (num !== NUM_PLAIN_INTEGER) return false;
+        const lead = c === 45 ? bytes[start + 1]! : c;
+        return c !== 43 && (lead !== 48 || n === 1);
+      }
+      if (c < 48 || c > 57 || n < 8 || n > 35) {
+        out.kind = KIND_TEXT;
+        out.value = NaN;
+        return false;
+      }
+      if (n === 10 && bytes[start + 4] === 45 && bytes[start + 7] === 45) {
+        const y = digitsAt(bytes, start, 4);
+        const m = digitsAt(bytes, start + 5, 2);
+        const d = digitsAt(bytes, start + 8, 2);
+        if (y >= 0 && m >= 0 && d >= 0 && m >= 1 && m <= 12 && d >= 1 && d <= 28) {
+          // Days 1-28 exist in every month; other days take the full calendar check below.
+          out.kind = KIND_DATE;
+          out.value = daysFromCivil(y, m, d) * DAY_MS;
+          return true;
+        }
+        if (y >= 0 && m >= 0 && d >= 0 && checkCalendar(y, m, d) === null) {
+          out.kind = KIND_DATE;
+          out.value = daysFromCivil(y, m, d) * DAY_MS;
+          return true;
+        }
+      }
+      this.classify(decodeBytes(bytes, start, end), out);
+      return false;
+    }
+    if (n >= 2 && n <= 5) {
+      // true, yes, false, no in any case: ASCII letters only.
+      const b = wordBit(bytes, start, n);
+      if (b >= 0) {
+        out.kind = KIND_BOOLEAN;
+        out.value = b;
+        return false;
+      }
+    }
+    out.kind = KIND_TEXT;
+    out.value = NaN;
+    return false;
   }
 
   /** Classifies the unquoted text of a cell. Writes into `out` to avoid allocating per cell. */
@@ -102,4 +202,54 @@ export class CellClassifier {
     out.kind = KIND_TEXT | spaced;
     out.value = NaN;
   }
+}
+
+function sameBytes(bytes: Uint8Array, start: number, token: Uint8Array): boolean {
+  for (let i = 0; i < token.length; i++) if (bytes[start + i] !== token[i]) return false;
+  return true;
+}
+
+function digitsAt(bytes: Uint8Array, at: number, count: number): number {
+  let v = 0;
+  for (let i = at; i < at + count; i++) {
+    const c = bytes[i]! - 48;
+    if (c < 0 || c > 9) return -1;
+    v = v * 10 + c;
+  }
+  return v;
+}
+
+/** The boolean words as lower-case ASCII bytes packed little-endian, with their values. */
+const WORDS = new Map([['true', 1], ['yes', 1], ['false', 0], ['no', 0]].map(([w, v]) => {
+  let key = 0;
+  for (let i = (w as string).length - 1; i >= 0; i--) key = key * 256 + (w as string).charCodeAt(i);
+  return [key, v as number] as const;
+}));
+
+/** 1 for true/yes, 0 for false/no (any case), -1 otherwise; no string is made. */
+function wordBit(bytes: Uint8Array, start: number, n: number): number {
+  let key = 0;
+  let scale = 1;
+  for (let i = start; i < start + n; i++) {
+    let c = bytes[i]!;
+    if (c >= 65 && c <= 90) c += 32;
+    else if (c < 97 || c > 122) return -1;
+    key += c * scale;
+    scale *= 256;
+  }
+  return WORDS.get(key) ?? -1;
+}
+
+/** Short ASCII cells skip the decoder's per-call cost. */
+export function decodeBytes(bytes: Uint8Array, start: number, end: number): string {
+  if (end - start <= 16) {
+    let s = '';
+    for (let i = start; i < end; i++) {
+      const c = bytes[i]!;
+      if (c >= 0x80) return decoder.decode(bytes.subarray(start, end));
+      s += String.fromCharCode(c);
+    }
+    return s;
+  }
+  return decoder.decode(bytes.subarray(start, end));
 }

@@ -51,10 +51,16 @@ export function revealInvisibles(text: string, options: RevealOptions = {}): str
   let source = text;
   let cut = false;
   if (source.length > maxLength) {
-    // Code points, not UTF-16 units: a cut inside a pair would leave a lone surrogate.
-    const points = Array.from(source);
-    if (points.length > maxLength) {
-      source = points.slice(0, maxLength).join('');
+    // Code points, not UTF-16 units: a cut inside a pair would leave a lone surrogate. Only the
+    // kept part is walked: a cell can be hundreds of MB, more than an array of its characters holds.
+    let end = 0;
+    for (let points = 0; end < source.length && points < maxLength; points++) {
+      const c = source.charCodeAt(end);
+      const low = source.charCodeAt(end + 1);
+      end += c >= 0xd800 && c <= 0xdbff && low >= 0xdc00 && low <= 0xdfff ? 2 : 1;
+    }
+    if (end < source.length) {
+      source = source.slice(0, end);
       cut = true;
     }
   }

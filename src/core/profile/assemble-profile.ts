@@ -46,6 +46,12 @@ export function assembleProfile(st: JobState, read: ((offset: number, length: nu
       if (t) totals.set('constraint', t);
     }
     columns.push(column);
+    if ((column.type === 'integer' || column.type === 'decimal') && sorted && sorted.length > 0 && column.stats === null) {
+      st.notices.push({
+        code: 'numeric-overflow', severity: 'warning',
+        message: `Column "${name}" holds numbers too extreme for double-precision arithmetic (from ${sorted[0]} to ${sorted[sorted.length - 1]}), so its mean, spread, quartiles and histogram are not given.`,
+      });
+    }
     allPending.push({ column, flags: pending, totals });
     if (rowValues && sorted) typed.set(name, { sorted, rowValues, numeric: column.type === 'integer' || column.type === 'decimal' });
   });
@@ -131,6 +137,9 @@ export function assembleProfile(st: JobState, read: ((offset: number, length: nu
   for (const n of st.headerNotes) {
     if (n.problem === 'duplicate') st.notices.push({ code: 'duplicate-header', severity: 'warning', message: `Column ${n.field + 1} repeats the header name "${n.original}"; it is called "${n.name}" here.` });
     if (n.problem === 'empty') st.notices.push({ code: 'empty-header', severity: 'warning', message: `Column ${n.field + 1} has no header name; it is called "${n.name}" here.` });
+  }
+  if (records.rows === 0 && st.dialect.header && st.columns.length > 0) {
+    st.notices.push({ code: 'header-only', severity: 'warning', message: `The file has a header of ${st.columns.length} column${st.columns.length === 1 ? '' : 's'} but no data records.` });
   }
   if (st.partial) {
     st.notices.push({ code: 'partial', severity: 'information', message: `First pass: only the first ${records.rows} records were read. The exact profile follows.` });

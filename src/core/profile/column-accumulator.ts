@@ -1,12 +1,15 @@
 // Everything one pass keeps about one column, per row where the later rules need rows: one byte
 // of kind, the number (or time) where the cell has one, and the category code while the column
 // has few enough distinct values. Accumulators of consecutive row ranges merge by concatenation.
+// Cells arrive as UTF-8 bytes: numbers are read from the bytes and categories are looked up by
+// their bytes, so a string is made only for a value not seen before in the column.
 import {
-  CellClassifier, KIND_ABSENT, KIND_BOOLEAN, KIND_DATE, KIND_DATETIME, KIND_DECIMAL, KIND_IMPOSSIBLE, KIND_INTEGER,
-  KIND_MASK, KIND_MISSING, KIND_SLASH, KIND_SPACED, KIND_TEXT, MAX_TOKENS, type CellReading,
+  CellClassifier, decodeBytes, KIND_ABSENT, KIND_BOOLEAN, KIND_DATE, KIND_DATETIME, KIND_DECIMAL, KIND_IMPOSSIBLE,
+  KIND_INTEGER, KIND_MASK, KIND_MISSING, KIND_SLASH, KIND_SPACED, KIND_TEXT, MAX_TOKENS, type CellReading,
 } from '../infer/classify-cell';
 import type { KindCounts } from '../infer/infer-type';
-import { HyperLogLog } from './hyper-log-log';
+import { ByteDictionary, type DictionaryParts } from './byte-dictionary';
+import { hashBytes, HyperLogLog } from './hyper-log-log';
 
 export class GrowableFloat64 {
   data: Float64Array;
@@ -16,7 +19,7 @@ export class GrowableFloat64 {
   }
   ensure(n: number): void {
     if (n <= this.data.length) return;
-    let cap = this.data.length * 2;
+    let cap = Math.max(1024, this.data.length * 2);
     while (cap < n) cap *= 2;
     const next = new Float64Array(cap);
     next.set(this.data.subarray(0, this.length));
@@ -31,12 +34,12 @@ export class GrowableFloat64 {
   }
 }
 
-class GrowableBytes {
-  data = new Uint8Array(1024);
+export class GrowableBytes {
+  data: Uint8Array = new Uint8Array(1024);
   length = 0;
   push(v: number): void {
     if (this.length === this.data.length) {
-      const next = new Uint8Array(this.data.length * 2);
+      const next = new Uint8Array(Math.max(1024, this.data.length * 2));
       next.set(this.data);
       this.data = next;
     }
@@ -47,12 +50,12 @@ class GrowableBytes {
   }
 }
 
-class GrowableInt32 {
-  data = new Int32Array(1024);
+export class GrowableInt32 {
+  data: Int32Array = new Int32Array(1024);
   length = 0;
   push(v: number): void {
     if (this.length === this.data.length) {
-      const next = new Int32Array(this.data.length * 2);
+      const next = new Int32Array(Math.max(1024, this.data.length * 2));
       next.set(this.data);
       this.data = next;
     }
@@ -67,6 +70,38 @@ export interface AccumulatorLimits {
   maxDistinct: number;
 }
 
+/**
+ * An accumulator as plain data: typed arrays (whose buffers can be transferred to another thread)
+ * and JSON-like members; see `ColumnAccumulator.toParts` / `fromParts`.
+ */
+export interface AccumulatorParts {
+  kinds: Uint8Array;
+  rows: number;
+  values: Float64Array | null;
+  codes: Int32Array | null;
+  distinct: number;
+  wideTexts: [string, number][];
+  categoryCounts: Float64Array;
+  dictionary: DictionaryParts;
+  capped: boolean;
+  uncountedCells: number;
+  hll: Uint8Array;
+  hllFilled: boolean;
+  tokenCounts: Float64Array;
+  counts: KindCounts;
+  missing: number;
+  absent: number;
+  spaced: number;
+  dense: Int32Array | null;
+  denseKind: number;
+  denseBase: number;
+}
+
+const encoder = new TextEncoder();
+const DAY_MS = 86_400_000;
+/** Values around the first one that the dense cache covers: 32 KiB of codes, small enough for L1/L2. */
+const DENSE = 8192;
+
 export class ColumnAccumulator {
   /** Kind per row (see classify-cell). */
   readonly kinds = new GrowableBytes();
@@ -74,22 +109,43 @@ export class ColumnAccumulator {
   values: GrowableFloat64 | null = null;
   /** Category code per row (-1 for missing); dropped when the column has too many distinct values. */
   codes: GrowableInt32 | null = new GrowableInt32();
-  /** Distinct values as written, in order of first appearance, with their counts. */
-  readonly categories = new Map<string, number>();
+  /** Count per category code (codes number the distinct values in order of first appearance). */
   readonly categoryCounts: number[] = [];
-  /** True once `categories` stopped taking new values. */
+  /** The distinct values keyed by their bytes; each entry's value is its category code. */
+  readonly dictionary = new ByteDictionary();
+  /** Distinct values (category codes given out). */
+  distinct = 0;
+  /**
+   * Texts of non-ASCII values: different invalid UTF-8 bytes decode to the same text, and are then
+   * one category (ASCII bytes and valid UTF-8 map one to one to texts, so need no check).
+   */
+  private readonly wideTexts = new Map<string, number>();
+  private categoryTexts: Map<string, number> | null = null;
+  /** True once the dictionary stopped taking new values. */
   capped = false;
   /** Cells beyond the cap, still counted, whose value was not kept. */
   uncountedCells = 0;
+  /**
+   * Distinct-value estimate, needed only once the column is capped: until then it is left empty and
+   * filled from the dictionary at the cap (the registers depend only on the set of hashes added).
+   */
   readonly hll = new HyperLogLog();
+  hllFilled = false;
   readonly tokenCounts = new Float64Array(MAX_TOKENS);
   readonly counts: KindCounts = { integer: 0, decimal: 0, boolean: 0, date: 0, datetime: 0, slash: 0, text: 0, impossible: 0 };
   missing = 0;
   absent = 0;
   spaced = 0;
   private readonly reading: CellReading = { kind: 0, value: NaN };
+  /**
+   * Category codes by value for canonically written integers or dates (one kind per column) near
+   * the first one: small-range columns skip the hash table. A cache only: -1 means "ask the dictionary".
+   */
+  private dense: Int32Array | null = null;
+  private denseKind = 0;
+  private denseBase = 0;
 
-  constructor(private readonly classifier: CellClassifier, private readonly limits: AccumulatorLimits) {}
+  constructor(readonly classifier: CellClassifier, readonly limits: AccumulatorLimits) {}
 
   get rows(): number {
     return this.kinds.length;
@@ -97,20 +153,34 @@ export class ColumnAccumulator {
 
   /** Adds the next row's cell; `text` null when the record had no such field. */
   add(text: string | null): void {
-    const row = this.kinds.length;
     if (text === null) {
-      this.kinds.push(KIND_ABSENT);
-      this.absent++;
-      this.missing++;
-      this.values?.push(NaN);
-      this.codes?.push(-1);
+      this.addAbsent();
       return;
     }
+    const bytes = encoder.encode(text);
+    this.addBytes(bytes, 0, bytes.length, hashBytes(bytes, 0, bytes.length));
+  }
+
+  /** Adds a row whose record had no such field. */
+  addAbsent(): void {
+    this.kinds.push(KIND_ABSENT);
+    this.absent++;
+    this.missing++;
+    this.values?.push(NaN);
+    this.codes?.push(-1);
+  }
+
+  /**
+   * Adds the next row's cell from the UTF-8 bytes of its value (`bytes[start, end)`, quotes removed
+   * and doubled quotes collapsed); `hash` is `hashBytes` of those bytes.
+   */
+  addBytes(bytes: Uint8Array, start: number, end: number, hash: number): void {
     const r = this.reading;
-    this.classifier.classify(text, r);
-    this.kinds.push(r.kind);
-    const kind = r.kind & KIND_MASK;
-    if (r.kind & KIND_SPACED) this.spaced++;
+    const canonical = this.classifier.classifyBytes(bytes, start, end, r);
+    const rawKind = r.kind;
+    this.kinds.push(rawKind);
+    const kind = rawKind & KIND_MASK;
+    if (rawKind & KIND_SPACED) this.spaced++;
     if (kind >= KIND_MISSING) {
       this.missing++;
       this.tokenCounts[kind - KIND_MISSING]! += 1;
@@ -119,34 +189,103 @@ export class ColumnAccumulator {
       return;
     }
     this.countKind(kind);
-    if (!Number.isNaN(r.value)) {
-      if (this.values === null) {
-        this.values = new GrowableFloat64(Math.max(1024, row + 1));
-        this.values.data.fill(NaN, 0, row);
-        this.values.length = row;
-      }
-      this.values.push(r.value);
+    const value = r.value;
+    if (value === value) {
+      if (this.values === null) this.startValues();
+      this.values!.push(value);
     } else {
       this.values?.push(NaN);
     }
-    this.hll.add(text);
-    let code = this.categories.get(text);
-    if (code === undefined && !this.capped) {
-      if (this.categories.size >= this.limits.maxDistinct) {
-        this.capped = true;
-        this.codes = null;
-      } else {
-        code = this.categories.size;
-        this.categories.set(text, code);
-        this.categoryCounts.push(0);
+    if (this.hllFilled) this.hll.addHash(hash);
+    let code: number;
+    if (canonical) {
+      // The value determines the bytes: its code can be cached by value.
+      const key = kind === KIND_DATE ? value / DAY_MS : value;
+      if (this.dense === null) {
+        this.dense = new Int32Array(DENSE).fill(-1);
+        this.denseKind = kind;
+        this.denseBase = key - DENSE / 2;
+      }
+      const at = key - this.denseBase;
+      if (kind === this.denseKind && at >= 0 && at < DENSE) {
+        code = this.dense[at]!;
+        if (code < 0) {
+          code = this.code(bytes, start, end, hash);
+          this.dense[at] = code;
+        }
+      } else code = this.code(bytes, start, end, hash);
+    } else code = this.code(bytes, start, end, hash);
+    if (code < 0) this.uncountedCells++;
+    else this.categoryCounts[code]! += 1;
+    this.codes?.push(code);
+  }
+
+  /** The cell's category code from the dictionary (new values added), or -1 beyond the cap. */
+  private code(bytes: Uint8Array, start: number, end: number, hash: number): number {
+    const code = this.dictionary.lookup(bytes, start, end, hash);
+    if (code >= 0 || this.capped) return code;
+    return this.newValue(bytes, start, end, hash);
+  }
+
+  private startValues(): void {
+    const row = this.kinds.length - 1;
+    this.values = new GrowableFloat64(Math.max(1024, row + 1));
+    this.values.data.fill(NaN, 0, row);
+    this.values.length = row;
+  }
+
+  /**
+   * Distinct values as written (decoded once, when asked: the hot path keeps bytes only), in order
+   * of first appearance: value -> category code.
+   */
+  get categories(): ReadonlyMap<string, number> {
+    if (this.categoryTexts !== null && this.categoryTexts.size === this.distinct) return this.categoryTexts;
+    const m = new Map<string, number>();
+    const d = this.dictionary;
+    for (let k = 0; k < d.size; k++) {
+      const code = d.values[k]!;
+      if (code === m.size) m.set(decodeBytes(d.arena, d.starts[k]!, d.starts[k]! + d.lengths[k]!), code);
+    }
+    this.categoryTexts = m;
+    return m;
+  }
+
+  /** A value not in the dictionary: its category code, or -1 when the cap is reached now. */
+  private newValue(bytes: Uint8Array, start: number, end: number, hash: number): number {
+    let code = -1;
+    let wide: string | null = null;
+    for (let i = start; i < end; i++) {
+      if (bytes[i]! >= 0x80) {
+        wide = decodeBytes(bytes, start, end);
+        code = this.wideTexts.get(wide) ?? -1;
+        break;
       }
     }
-    if (code === undefined) {
-      this.uncountedCells++;
-    } else {
-      this.categoryCounts[code]! += 1;
+    if (code < 0) {
+      if (this.distinct >= this.limits.maxDistinct) {
+        this.cap();
+        return -1;
+      }
+      code = this.distinct++;
+      this.categoryCounts.push(0);
+      if (wide !== null) this.wideTexts.set(wide, code);
     }
-    this.codes?.push(code ?? -1);
+    this.dictionary.insert(bytes, start, end, hash, code);
+    return code;
+  }
+
+  private cap(): void {
+    this.capped = true;
+    this.codes = null;
+    this.fillHll();
+  }
+
+  /** Adds every dictionary value to the estimate (once), so that it covers the cells before the cap. */
+  fillHll(): void {
+    if (this.hllFilled) return;
+    this.hllFilled = true;
+    const d = this.dictionary;
+    for (let k = 0; k < d.size; k++) this.hll.addHash(d.hashes[k]!);
   }
 
   private countKind(kind: number): void {
@@ -163,10 +302,62 @@ export class ColumnAccumulator {
     }
   }
 
+  /** The accumulator as plain data; its typed arrays are the accumulator's own (no copy). */
+  toParts(): AccumulatorParts {
+    return {
+      kinds: this.kinds.data, rows: this.kinds.length,
+      values: this.values ? this.values.data : null,
+      codes: this.codes ? this.codes.data : null,
+      distinct: this.distinct,
+      wideTexts: [...this.wideTexts],
+      categoryCounts: Float64Array.from(this.categoryCounts),
+      dictionary: this.dictionary.toParts(),
+      capped: this.capped, uncountedCells: this.uncountedCells,
+      hll: this.hll.registers, hllFilled: this.hllFilled,
+      tokenCounts: this.tokenCounts, counts: { ...this.counts },
+      missing: this.missing, absent: this.absent, spaced: this.spaced,
+      dense: this.dense, denseKind: this.denseKind, denseBase: this.denseBase,
+    };
+  }
+
+  /** Rebuilds an accumulator from `toParts` (the typed arrays are taken over, not copied). */
+  static fromParts(p: AccumulatorParts, classifier: CellClassifier, limits: AccumulatorLimits): ColumnAccumulator {
+    const a = new ColumnAccumulator(classifier, limits);
+    a.kinds.data = p.kinds;
+    a.kinds.length = p.rows;
+    if (p.values) {
+      a.values = new GrowableFloat64(1);
+      a.values.data = p.values;
+      a.values.length = p.rows;
+    }
+    if (p.codes) {
+      a.codes!.data = p.codes;
+      a.codes!.length = p.rows;
+    } else a.codes = null;
+    a.distinct = p.distinct;
+    for (const [t, c] of p.wideTexts) a.wideTexts.set(t, c);
+    for (const n of p.categoryCounts) a.categoryCounts.push(n);
+    a.dictionary.fromParts(p.dictionary);
+    a.capped = p.capped;
+    a.uncountedCells = p.uncountedCells;
+    a.hll.registers.set(p.hll);
+    a.hllFilled = p.hllFilled;
+    a.tokenCounts.set(p.tokenCounts);
+    Object.assign(a.counts, p.counts);
+    a.missing = p.missing;
+    a.absent = p.absent;
+    a.spaced = p.spaced;
+    a.dense = p.dense;
+    a.denseKind = p.denseKind;
+    a.denseBase = p.denseBase;
+    return a;
+  }
+
   /** Appends another accumulator that holds the rows right after this one's. */
   append(other: ColumnAccumulator): void {
     const base = this.rows;
-    for (let i = 0; i < other.kinds.length; i++) this.kinds.push(other.kinds.data[i]!);
+    const ok = other.kinds.view();
+    for (let i = 0; i < ok.length; i++) this.kinds.push(ok[i]!);
     if (other.values || this.values) {
       if (!this.values) {
         this.values = new GrowableFloat64(Math.max(1024, base));
@@ -178,32 +369,34 @@ export class ColumnAccumulator {
       this.values.data.set(add, this.values.length);
       this.values.length += add.length;
     }
-    // Re-code the other side's categories into this side's dictionary.
-    const remap: number[] = [];
-    let i = 0;
-    for (const [value, code] of other.categories) {
-      void code;
-      let mine = this.categories.get(value);
-      if (mine === undefined && !this.capped) {
-        if (this.categories.size >= this.limits.maxDistinct) {
-          this.capped = true;
-          this.codes = null;
-        } else {
-          mine = this.categories.size;
-          this.categories.set(value, mine);
-          this.categoryCounts.push(0);
-        }
+    // Re-code the other side's values into this side's dictionary, in the order they were first
+    // seen there (its entries are in that order), by their bytes: no text is made.
+    const remap = new Int32Array(other.distinct).fill(-1);
+    const done = new Uint8Array(other.distinct);
+    const od = other.dictionary;
+    for (let k = 0; k < od.size; k++) {
+      const theirs = od.values[k]!;
+      const b = od.bytesOf(k);
+      const h = od.hashes[k]!;
+      let mine = this.dictionary.lookup(b, 0, b.length, h);
+      if (done[theirs] === 1) {
+        // Another spelling of a value already re-coded (invalid UTF-8 that decodes alike).
+        if (mine < 0 && remap[theirs]! >= 0) this.dictionary.insert(b, 0, b.length, h, remap[theirs]!);
+        continue;
       }
-      const n = other.categoryCounts[i] ?? 0;
-      if (mine === undefined) this.uncountedCells += n;
+      done[theirs] = 1;
+      if (mine < 0 && !this.capped) mine = this.newValue(b, 0, b.length, h);
+      remap[theirs] = mine;
+    }
+    for (let c = 0; c < other.distinct; c++) {
+      const n = other.categoryCounts[c] ?? 0;
+      const mine = remap[c]!;
+      if (mine < 0) this.uncountedCells += n;
       else this.categoryCounts[mine]! += n;
-      remap.push(mine ?? -1);
-      i++;
     }
     this.uncountedCells += other.uncountedCells;
     if (other.capped) {
-      this.capped = true;
-      this.codes = null;
+      if (!this.capped) this.cap();
     }
     if (this.codes && other.codes) {
       const oc = other.codes.view();
@@ -212,7 +405,11 @@ export class ColumnAccumulator {
         this.codes.push(c < 0 ? -1 : remap[c] ?? -1);
       }
     }
-    this.hll.merge(other.hll);
+    if (this.capped) {
+      this.fillHll();
+      other.fillHll();
+      this.hll.merge(other.hll);
+    }
     for (let t = 0; t < MAX_TOKENS; t++) this.tokenCounts[t]! += other.tokenCounts[t]!;
     for (const key of Object.keys(this.counts) as (keyof KindCounts)[]) this.counts[key] += other.counts[key];
     this.missing += other.missing;

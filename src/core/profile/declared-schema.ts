@@ -1,6 +1,7 @@
 // What a CSV on the Web metadata document declares, applied to a profiling job: the dialect, the
 // columns' types, levels and missing tokens, and the constraints every cell is checked against.
 // Invalid metadata is reported (with its location) and then not used: profiling goes on without it.
+import { dialectCharProblem } from '../read/byte-dialect';
 import { compileSchema, type CompiledColumn } from '../csvw/compile-schema';
 import { parseMetadata } from '../csvw/parse-metadata';
 import { primaryKeyTracker, type PrimaryKeyTracker } from '../csvw/primary-key-tracker';
@@ -49,13 +50,28 @@ export function loadDeclared(text: string, location: string, options: ProfileOpt
     return { schema: null, options, notices };
   }
   const d = metadata.dialect;
-  const encoding = d.encoding ? ENCODINGS[d.encoding.toLowerCase()] : undefined;
+  const encoding = d.encoding && Object.hasOwn(ENCODINGS, d.encoding.toLowerCase()) ? ENCODINGS[d.encoding.toLowerCase()] : undefined;
   if (d.encoding && !encoding) notices.push({ code: 'metadata', severity: 'information', message: `Metadata ${location}: encoding "${d.encoding}" is not one Assay reads; the encoding is detected instead.` });
   const headerRows = d.headerRowCount ?? (d.header === false ? 0 : 1);
+  // The scanner reads one ASCII byte as delimiter or quote; anything else is detected instead.
+  const usable = (what: 'delimiter' | 'quoteChar', ch: string | null | undefined): string | null => {
+    if (ch === null || ch === undefined) return null;
+    const problem = dialectCharProblem(what, ch);
+    if (problem === null) return ch;
+    notices.push({ code: 'metadata', severity: 'information', message: `Metadata ${location}: ${problem}; Assay detects it instead.` });
+    return null;
+  };
+  let delimiter = options.delimiter ?? usable('delimiter', d.delimiter);
+  let quote = options.quote ?? usable('quoteChar', d.quoteChar);
+  if (delimiter !== null && delimiter === quote) {
+    notices.push({ code: 'metadata', severity: 'information', message: `Metadata ${location}: the delimiter and the quote are both "${delimiter}"; Assay detects them instead.` });
+    if (options.delimiter === null) delimiter = null;
+    if (options.quote === null) quote = null;
+  }
   const merged: ProfileOptions = Object.freeze({
     ...options,
-    delimiter: options.delimiter ?? d.delimiter ?? null,
-    quote: options.quote ?? (d.quoteChar === undefined ? null : d.quoteChar ?? null),
+    delimiter,
+    quote,
     header: options.header ?? (headerRows > 0),
     encoding: options.encoding ?? encoding ?? null,
   });

@@ -35,12 +35,17 @@ export function compareGroups(
     groups.push({
       value: labels[code] ?? '',
       count: sorted.length,
-      mean: sorted.length ? m.mean : null,
-      sd: m.sd ?? null,
-      median: sorted.length ? (quantileSorted(sorted, 0.5, quantileType) ?? NaN) : null,
-      iqr: sorted.length ? q3 - q1 : null,
+      mean: sorted.length ? finiteOrNull(m.mean) : null,
+      sd: finiteOrNull(m.sd),
+      median: sorted.length ? finiteOrNull(quantileSorted(sorted, 0.5, quantileType)) : null,
+      iqr: sorted.length ? finiteOrNull(q3 - q1) : null,
     });
   }
   groups.sort((a, b) => b.count - a.count || naturalCompare(a.value, b.value));
   return { numeric, by, groups: groups.slice(0, MAX_GROUPS) };
+}
+
+/** Values too extreme for doubles (a sum or square past 1.8e308) have no summary: null, as JSON needs. */
+function finiteOrNull(x: number | null | undefined): number | null {
+  return x === null || x === undefined || !Number.isFinite(x) ? null : x;
 }

@@ -61,3 +61,21 @@ export function hashString(text: string): number {
   h ^= h >>> 16;
   return h >>> 0;
 }
+
+/**
+ * `hashString` over UTF-8 bytes: FNV-1a per byte, then the murmur3 finaliser. For ASCII text it
+ * equals `hashString` of the same text (one byte per code unit).
+ */
+export function hashBytes(bytes: Uint8Array, start: number, end: number): number {
+  let h = 0x811c9dc5;
+  for (let i = start; i < end; i++) {
+    h ^= bytes[i]!;
+    h = Math.imul(h, 0x01000193);
+  }
+  h ^= h >>> 16;
+  h = Math.imul(h, 0x85ebca6b);
+  h ^= h >>> 13;
+  h = Math.imul(h, 0xc2b2ae35);
+  h ^= h >>> 16;
+  return h >>> 0;
+}

@@ -7,11 +7,13 @@ import type { ProfileOptions } from '../options';
 import { byteDialect, type ByteDialect } from '../read/byte-dialect';
 import { detectEncoding } from '../read/detect-encoding';
 import { RecordScanner, type RecordView } from '../read/record-scanner';
+import type { MutableRecordView } from '../read/record-view';
 import { sniffDialect, type Dialect } from '../read/sniff-dialect';
 import { createUtf8Transcoder, type Utf8Transcoder } from '../read/utf8-transcoder';
 import { assembleProfile } from './assemble-profile';
 import { ColumnAccumulator, GrowableFloat64 } from './column-accumulator';
-import { hashString } from './hyper-log-log';
+import { addRecordCells } from './add-record-cells';
+import { RecordKeySet } from './record-key-set';
 import { checkRecord, compileDeclared, declaredColumn, loadDeclared, type DeclaredSchema } from './declared-schema';
 import type { EncodingName, HeaderNote, Notice, RaggedRow } from './types';
 
@@ -21,13 +23,18 @@ const HEAD_BYTES = 64 * 1024;
 const MAX_RAGGED_LISTED = 1000;
 /** Above this, a non-UTF-8 file's transcoded text is not kept for placing flags. */
 const MAX_KEPT_TRANSCODED = 256 * 1024 * 1024;
+/**
+ * Columns profiled at most. A first record with more fields is almost always not a table (a file
+ * without line breaks, or the wrong delimiter), and each column holds its own summaries.
+ */
+export const MAX_COLUMNS = 200_000;
 
 export interface RecordState {
   rows: number;
   offsets: GrowableFloat64;
   lines: GrowableFloat64;
   /** Record hash -> first row with it, for exact-duplicate records. */
-  seen: Map<number, number>;
+  seen: RecordKeySet;
   /** Rows that repeat an earlier record (candidate; confirmed on the bytes when they can be read). */
   duplicates: { row: number; first: number }[];
   duplicateTotal: number;
@@ -93,6 +100,7 @@ export class RangeJob {
   private headerPending: boolean;
   private skip: number;
   private readonly cells: (string | null)[] = [];
+  private readonly hash = { hi: 0, lo: 0 };
   private readonly scanner: RecordScanner;
 
   constructor(plan: RangePlan) {
@@ -104,7 +112,7 @@ export class RangeJob {
       options, source: plan.source, encoding: plan.encoding, bom: plan.bomLength > 0, bomLength: plan.bomLength,
       dialect: plan.dialect, byteDialect: bd, names: [], headerNotes: [], notices: [], columns: [],
       records: {
-        rows: 0, offsets: new GrowableFloat64(), lines: new GrowableFloat64(), seen: new Map(), duplicates: [],
+        rows: 0, offsets: new GrowableFloat64(), lines: new GrowableFloat64(), seen: new RecordKeySet(), duplicates: [],
         duplicateTotal: 0, ragged: [], raggedTotal: 0,
       },
       scan: { lineBreaks: 0, openLastLine: false, blankLines: 0, looseQuotes: 0, lf: 0, crlf: 0, cr: 0 },
@@ -119,6 +127,15 @@ export class RangeJob {
 
   private setColumns(names: string[]): void {
     const st = this.state;
+    if (names.length > MAX_COLUMNS) {
+      // Refuse rather than build one set of summaries per field: stop reading, and say why.
+      st.notices.push({
+        code: 'too-many-columns', severity: 'error', line: 1,
+        message: `The first record has ${names.length} fields; Assay profiles at most ${MAX_COLUMNS} columns, so nothing was profiled. A file without line breaks, or read with the wrong delimiter, looks like this.`,
+      });
+      this.full = true;
+      return;
+    }
     st.names = names;
     const shared = new CellClassifier(st.options.missingTokens, st.dialect.decimalSeparator);
     st.columns = names.map((_, i) => {
@@ -144,7 +161,7 @@ export class RangeJob {
       looseQuotes: sc.looseQuotes, lf: sc.lf, crlf: sc.crlf, cr: sc.cr,
     };
     if (this.headerPending) {
-      st.notices.push({ code: 'empty', severity: 'warning', message: 'The file holds no records.' });
+      st.notices.push({ code: 'empty', severity: 'warning', message: st.bytes === 0 ? 'The file is empty.' : 'The file holds no records, only blank lines.' });
     }
     return st;
   }
@@ -184,26 +201,13 @@ export class RangeJob {
       rec.raggedTotal++;
       if (rec.ragged.length < MAX_RAGGED_LISTED) rec.ragged.push({ row, line: r.line, fields: r.fieldCount, expected: width });
     }
-    let h1 = 0x9e3779b9 ^ r.fieldCount;
-    let h2 = 0x85ebca6b;
     const declared = st.declared?.columns ? st.declared : null;
     if (declared) this.cells.length = 0;
-    for (let i = 0; i < width; i++) {
-      const text = i < r.fieldCount ? r.text(i) : null;
-      st.columns[i]!.add(text);
-      if (declared) this.cells.push(text);
-      const h = text === null ? 0x27d4eb2f : hashString(text);
-      h1 = Math.imul(h1 ^ h, 0x01000193) >>> 0;
-      h2 = (Math.imul(h2, 31) + h) >>> 0;
-    }
-    for (let i = width; i < r.fieldCount; i++) h1 = Math.imul(h1 ^ hashString(r.text(i)), 0x01000193) >>> 0;
+    // The scanner's one view: its typed offset buffers are read directly (see add-record-cells).
+    const key = addRecordCells(r as MutableRecordView, st.byteDialect.quote, st.columns, declared ? this.cells : null, this.hash);
     if (declared) checkRecord(declared, row, this.cells, options.rules.maxFlagsPerRule);
-    // 52 bits of two independent mixes: a false match among 10 million records is very unlikely,
-    // and candidates are confirmed on the values before they are reported.
-    const key = (h1 >>> 0) * 0x100000 + (h2 & 0xfffff);
-    const first = rec.seen.get(key);
-    if (first === undefined) rec.seen.set(key, row);
-    else {
+    const first = rec.seen.firstOrAdd(key.hi, key.lo, row);
+    if (first !== 0) {
       rec.duplicateTotal++;
       if (rec.duplicates.length < options.rules.maxFlagsPerRule * 4) rec.duplicates.push({ row, first });
     }
@@ -295,12 +299,54 @@ export function createProfileJob(options: ProfileOptions, source: JobSource = { 
       let read: ((offset: number, length: number) => Uint8Array) | null = null;
       if (keptBytes) read = (offset, length) => keptBytes.subarray(offset, offset + length);
       else if (readRecord && st.encoding === 'utf-8') read = (offset, length) => readRecord(offset + st.bomLength, length);
+      readingNotices(st, transcoder!);
       if (keptDropped) {
         st.notices.push({ code: 'no-positions', severity: 'information', message: 'The file is too large to keep its re-encoded text, so flagged cells are listed by row without exact positions.' });
       }
       return assembleProfile(st, read);
     },
   };
+}
+
+/** What the reading stage noticed about the whole input: bytes that break the encoding, no line break. */
+function readingNotices(st: JobState, transcoder: Utf8Transcoder): void {
+  const bad = transcoder.replaced;
+  if (bad > 0) {
+    const plural = bad === 1 ? '' : 's';
+    if (st.encoding === 'utf-8') {
+      const line = lineOfOffset(st.records, transcoder.firstReplaced);
+      const where = line === null ? `at byte ${transcoder.firstReplaced}` : `at byte ${transcoder.firstReplaced}, in the record that starts on line ${line}`;
+      st.notices.push({
+        code: 'invalid-utf8', severity: 'warning', ...(line === null ? {} : { line }),
+        message: `${bad} byte sequence${plural} in the file ${bad === 1 ? 'is' : 'are'} not valid UTF-8 (the first ${where}); ${bad === 1 ? 'it reads' : 'each reads'} as the replacement character U+FFFD. The start of the file is valid UTF-8; if the file uses another encoding, choose it as an option.`,
+      });
+    } else {
+      st.notices.push({
+        code: 'invalid-utf16', severity: 'warning',
+        message: `${bad} code unit${plural} in the file ${bad === 1 ? 'does' : 'do'} not form valid ${st.encoding.toUpperCase()} (a lone surrogate, or an odd byte at the end); ${bad === 1 ? 'it reads' : 'each reads'} as the replacement character U+FFFD.`,
+      });
+    }
+  }
+  if (st.scan.lineBreaks === 0 && st.bytes > HEAD_BYTES) {
+    st.notices.push({
+      code: 'no-line-break', severity: 'warning', line: 1,
+      message: `The file is one line of ${st.bytes} bytes with no line break, so it reads as a single record. Check that it is delimited text with one record per line.`,
+    });
+  }
+}
+
+/** 1-based line where the data record holding byte `offset` starts; null before the first one. */
+function lineOfOffset(rec: RecordState, offset: number): number | null {
+  const offsets = rec.offsets.view();
+  let lo = 0;
+  let hi = offsets.length - 1;
+  if (offset < 0 || hi < 0 || offset < offsets[0]!) return null;
+  while (lo < hi) {
+    const mid = (lo + hi + 1) >> 1;
+    if (offsets[mid]! <= offset) lo = mid;
+    else hi = mid - 1;
+  }
+  return rec.lines.view()[lo] ?? null;
 }
 
 /** Sniffs the dialect from the start of the UTF-8 text (the options' choices win). */
@@ -313,6 +359,8 @@ export function planDialect(utf8Head: Uint8Array, options: ProfileOptions): Dial
 
 /** Makes header names usable as keys: empty names become `column N`, repeats get ` (2)`, ` (3)`. */
 export function uniqueNames(raw: string[], header: boolean): { names: string[]; notes: HeaderNote[] } {
+  // Too many to profile (setColumns refuses them): skip the work, and a Set past its size limit.
+  if (raw.length > MAX_COLUMNS) return { names: raw, notes: [] };
   const notes: HeaderNote[] = [];
   const used = new Set<string>();
   const names = raw.map((original, field) => {
@@ -361,6 +409,13 @@ function concat(parts: Uint8Array[], length: number): Uint8Array {
   return out;
 }
 
+/** The detector's reason as a sentence; it usually begins with the verdict already. */
+function notTextMessage(reason: string): string {
+  const verdict = 'this does not look like delimited text';
+  const sentence = reason.startsWith(verdict) ? reason : `${verdict}: ${reason}`;
+  return sentence.charAt(0).toUpperCase() + sentence.slice(1) + '.';
+}
+
 function notDelimited(reason: string, source: JobSource, bytes: number, options: ProfileOptions): ProfileResult {
   const empty = bytes === 0;
   return {
@@ -370,7 +425,7 @@ function notDelimited(reason: string, source: JobSource, bytes: number, options:
       partial: false, ragged: [], raggedTotal: 0, duplicateRecords: 0, headerNotes: [],
       notices: [empty
         ? { code: 'empty', severity: 'warning', message: 'The file is empty.' }
-        : { code: 'not-delimited-text', severity: 'error', message: `This does not look like delimited text: ${reason}. Nothing was profiled.` }],
+        : { code: 'not-delimited-text', severity: 'error', message: `${notTextMessage(reason)} Nothing was profiled.` }],
       columns: [], recordFlags: [], recordFlagTotals: [], groups: [],
       methods: { quantile: `Hyndman & Fan type ${options.quantileType}`, bins: options.bins.rule, edges: options.edges, missingTokens: [...options.missingTokens] },
     },

@@ -19,7 +19,8 @@ export const SHAPE_CAUTION =
   'A normality test can only fail to find a departure from the normal shape; a high p-value is not proof that the data are normal, and with many values even a harmless departure gives a low p-value. Look at the histogram too.';
 
 export interface NumericSummary {
-  stats: NumericStats;
+  /** Null when the values are too extreme for double-precision arithmetic (see `numericSummary`). */
+  stats: NumericStats | null;
   histogram: Histogram | null;
   grouped: GroupedTable | null;
   shape: ShapeCheck | null;
@@ -31,10 +32,24 @@ export function binValues(sorted: Float64Array, choice: BinChoice, mode: 'nice' 
   if (!edges) return { histogram: null, grouped: null };
   const closedLast = edges.edgeMode === 'exact';
   const counts = histogramCounts(sorted, edges.edges, closedLast);
+  // Guard for the profile's JSON contract: finite edges, and every value in one plain count.
+  let total = 0;
+  for (const c of counts) total += c;
+  if (!edges.edges.every(Number.isFinite) || total !== sorted.length || Object.keys(counts).length !== counts.length) {
+    return { histogram: null, grouped: null };
+  }
   const histogram: Histogram = { rule: edges.rule, label: edges.label, edgeMode: edges.edgeMode, width: edges.width, edges: edges.edges, counts };
   return { histogram, grouped: groupedTable(edges.edges, counts, closedLast, edges.rule, edges.label) };
 }
 
+/** Members of NumericStats that are always numbers: each must be finite for the summary to stand. */
+const ALWAYS_NUMBERS = ['sum', 'mean', 'sd', 'variance', 'sem', 'min', 'max', 'range', 'q1', 'median', 'q3', 'iqr', 'mad', 'trimmedMean'] as const;
+
+/**
+ * The numeric summary of a column. Values near the ends of the double range (a square above
+ * 1.8e308, a sum or range past it) leave moments that doubles cannot hold; rather than NaN or
+ * Infinity (which JSON cannot carry), the summary is then null, and the profile says why.
+ */
 export function numericSummary(sorted: Float64Array, _rowValues: Float64Array, level: Level, options: ProfileOptions): NumericSummary {
   const n = sorted.length;
   const m = Moments.of(sorted);
@@ -70,6 +85,7 @@ export function numericSummary(sorted: Float64Array, _rowValues: Float64Array, l
     geometricMean: ratio && min > 0 ? finiteOrNull(geometricMean(sorted)) : null,
     quantileType: type,
   };
+  if (ALWAYS_NUMBERS.some((k) => !Number.isFinite(stats[k]))) return { stats: null, histogram: null, grouped: null, shape: null };
   const { histogram, grouped } = binValues(sorted, options.bins, options.edges);
   let shape: ShapeCheck | null = null;
   if (level === 'interval' || level === 'ratio') {
@@ -77,11 +93,13 @@ export function numericSummary(sorted: Float64Array, _rowValues: Float64Array, l
     const skipped: string[] = [];
     if (n >= 3 && n <= 5000 && max > min) {
       const sw = shapiroWilk(sorted);
-      if (sw) tests.push({ method: 'shapiro-wilk', statistic: sw.w, p: sw.p, n });
+      if (sw && Number.isFinite(sw.w) && Number.isFinite(sw.p)) tests.push({ method: 'shapiro-wilk', statistic: sw.w, p: sw.p, n });
+      else if (sw) skipped.push('Shapiro-Wilk could not be computed: the values are too extreme for double-precision arithmetic');
     } else skipped.push(n < 3 ? 'Shapiro-Wilk needs at least 3 values' : n > 5000 ? 'Shapiro-Wilk (Royston) is defined for up to 5000 values' : 'all values are equal');
     if (n >= 20 && max > min) {
       const dp = dagostinoPearson(sorted);
-      if (dp) tests.push({ method: 'dagostino-pearson', statistic: dp.k2, p: dp.p, n });
+      if (dp && Number.isFinite(dp.k2) && Number.isFinite(dp.p)) tests.push({ method: 'dagostino-pearson', statistic: dp.k2, p: dp.p, n });
+      else if (dp) skipped.push("D'Agostino-Pearson could not be computed: the values are too extreme for double-precision arithmetic");
     } else skipped.push(n < 20 ? "D'Agostino-Pearson needs at least 20 values" : 'all values are equal');
     shape = { tests, skipped, caution: SHAPE_CAUTION };
   }

@@ -23,10 +23,22 @@ export function byteDialect(d: { delimiter: string; quote: string | null }): Byt
 }
 
 function codeOf(what: string, ch: string): number {
+  const problem = dialectCharProblem(what, ch);
+  if (problem !== null) throw new Error(problem);
+  return ch.charCodeAt(0);
+}
+
+/**
+ * Why `ch` cannot be the delimiter or quote (`what` names which), or null when it can: the scanner
+ * matches one ASCII byte other than CR and LF. Lets option and metadata readers refuse such a
+ * character with a clear message before a job starts.
+ * Example: `dialectCharProblem('delimiter', 'é')` gives `delimiter: expected one ASCII character, got "é"`.
+ */
+export function dialectCharProblem(what: string, ch: string): string | null {
   const c = ch.length === 1 ? ch.charCodeAt(0) : -1;
-  if (c < 0 || c > 0x7f) throw new Error(`${what}: expected one ASCII character, got "${ch}"`);
-  if (c === LF || c === CR) throw new Error(`${what}: a line break cannot be used, got ${JSON.stringify(ch)}`);
-  return c;
+  if (c < 0 || c > 0x7f) return `${what}: expected one ASCII character, got "${ch}"`;
+  if (c === LF || c === CR) return `${what}: a line break cannot be used, got ${JSON.stringify(ch)}`;
+  return null;
 }
 
 /** Checks byte codes given directly (as the scanner's constructor receives them). */

@@ -52,7 +52,8 @@ function bomOf(head: Uint8Array): { encoding: EncodingName; length: number } | n
 /**
  * UTF-16 without a byte-order mark: text whose characters are mostly ASCII has a zero high byte in
  * every code unit, so zeros gather at odd positions (little-endian) or even ones (big-endian).
- * Asks for at least a quarter of the code units to show the pattern and almost no zeros elsewhere.
+ * Asks for at least a quarter of the code units (and at least 4, or all of a shorter head) to show
+ * the pattern, and almost no zeros elsewhere.
  */
 function utf16WithoutBom(head: Uint8Array): EncodingName | null {
   const pairs = head.length >> 1;
@@ -63,8 +64,10 @@ function utf16WithoutBom(head: Uint8Array): EncodingName | null {
     if (head[i] === 0) evenZeros++;
     if (head[i + 1] === 0) oddZeros++;
   }
-  if (oddZeros * 4 >= pairs && evenZeros * 20 <= oddZeros) return 'utf-16le';
-  if (evenZeros * 4 >= pairs && oddZeros * 20 <= evenZeros) return 'utf-16be';
+  // A few zeros are no pattern: in a tiny head one stray NUL would pass the quarter test.
+  const enough = Math.min(pairs, 4);
+  if (oddZeros >= enough && oddZeros * 4 >= pairs && evenZeros * 20 <= oddZeros) return 'utf-16le';
+  if (evenZeros >= enough && evenZeros * 4 >= pairs && oddZeros * 20 <= evenZeros) return 'utf-16be';
   return null;
 }
 

@@ -91,7 +91,9 @@ export function sniffDialect(sample: string, overrides: DialectOverrides): Diale
   const quotes = overrides.quote !== null ? [overrides.quote] : QUOTES;
   let best: Trial | null = null;
   for (const d of delimiters) {
-    const tried = quotes.map((q) => trial(sample, d, q));
+    // A quote the same as the delimiter cannot be read (the option checks forbid giving both).
+    const tried = quotes.filter((q) => q !== d).map((q) => trial(sample, d, q));
+    if (tried.length === 0) continue;
     const pick = tried.length === 2 ? pickQuote(tried[0]!, tried[1]!) : tried[0]!;
     if (best === null || better(pick, best)) best = pick;
   }

@@ -1,7 +1,9 @@
 // Everything after this stage reads UTF-8 bytes. UTF-8 input passes through untouched (no copy;
-// only a leading byte-order mark is dropped); other encodings are decoded with a streaming
-// TextDecoder (which keeps a character split between chunks) and encoded again as UTF-8.
+// only a leading byte-order mark is dropped; its bytes are checked, not changed); other encodings
+// are decoded with a streaming TextDecoder (which keeps a character split between chunks) and
+// encoded again as UTF-8.
 import type { EncodingName } from '../profile/types';
+import { Utf8Validator } from './utf8-validator';
 
 export interface Utf8Transcoder {
   /** UTF-8 bytes for the next chunk of input (possibly empty; for UTF-8 input, a view of the chunk). */
@@ -9,11 +11,13 @@ export interface Utf8Transcoder {
   /** Flushes what the decoder still holds (an incomplete character becomes U+FFFD). */
   end(): Uint8Array;
   /**
-   * U+FFFD characters produced by lossy decoding: lone surrogates or a dangling byte in UTF-16.
-   * Always 0 for UTF-8 (bytes are not checked here; invalid ones decode to U+FFFD when a cell's text
-   * is made) and for windows-1252 (every byte maps to a character).
+   * Characters that will read as U+FFFD because the input breaks its encoding: ill-formed UTF-8
+   * sequences (passed on unchanged; they decode to U+FFFD when a cell's text is made), lone
+   * surrogates or a dangling byte in UTF-16. Always 0 for windows-1252 (every byte maps to a character).
    */
   readonly replaced: number;
+  /** UTF-8 input: byte offset (after the byte-order mark) of the first ill-formed sequence; otherwise -1. */
+  readonly firstReplaced: number;
 }
 
 const EMPTY = new Uint8Array(0);
@@ -30,15 +34,28 @@ export function createUtf8Transcoder(encoding: EncodingName, bomLength: number):
 
 function passThrough(bomLength: number): Utf8Transcoder {
   let skip = bomLength;
+  const check = new Utf8Validator();
   return {
     push(chunk) {
-      if (skip === 0) return chunk;
-      const cut = Math.min(skip, chunk.length);
-      skip -= cut;
-      return chunk.subarray(cut);
+      let out = chunk;
+      if (skip > 0) {
+        const cut = Math.min(skip, chunk.length);
+        skip -= cut;
+        out = chunk.subarray(cut);
+      }
+      check.push(out);
+      return out;
     },
-    end: () => EMPTY,
-    replaced: 0,
+    end() {
+      check.end();
+      return EMPTY;
+    },
+    get replaced() {
+      return check.invalid;
+    },
+    get firstReplaced() {
+      return check.firstInvalid;
+    },
   };
 }
 
@@ -98,5 +115,6 @@ function recode(encoding: 'utf-16le' | 'utf-16be' | 'windows-1252', bomLength: n
     get replaced() {
       return replaced;
     },
+    firstReplaced: -1,
   };
 }

@@ -1,0 +1,249 @@
+// The scale benchmark (issue 7): generates the seeded benchmark file, then measures in one run
+//   - raw read throughput (1 MiB chunks, counting line breaks): the ceiling for any reader,
+//   - the CLI's full profile (`dist/cli.js FILE --format json`): wall time, MB/s, peak RSS, for
+//     1 and 2 workers, and whether the two profiles agree,
+//   - the main thread's event-loop delay while worker threads profile the file (what an editor's
+//     extension host would feel),
+//   - the same kind of summary through @duckdb/node-api when it is installed (optional), as a ratio.
+// Figures go to stdout as a table and to bench-output/ as JSON.
+//
+// Usage: node bench/run.mjs [--size 1GB|500MB|5MB] [--seed N] [--quick] [--workers 1,2] [--no-duckdb]
+// `--quick` (a 2 MB file, seconds) proves the script works; CI runs it inside `npm test`.
+// Build first (`node esbuild.mjs`; `npm run bench` does both).
+import { spawn } from 'node:child_process';
+import { createReadStream, existsSync, mkdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { availableParallelism, cpus, freemem, loadavg, totalmem } from 'node:os';
+import { dirname, join, resolve } from 'node:path';
+import { monitorEventLoopDelay, performance } from 'node:perf_hooks';
+import { fileURLToPath, pathToFileURL } from 'node:url';
+import { Worker } from 'node:worker_threads';
+import { generateFile, GENERATOR_VERSION } from './generate-file.mjs';
+
+const root = resolve(dirname(fileURLToPath(import.meta.url)), '..');
+const outDir = join(root, 'bench-output');
+const cli = join(root, 'dist', 'cli.js');
+const MB = 1e6;
+
+function parseSize(text) {
+  const m = /^(\d+(?:\.\d+)?)\s*(B|KB|MB|GB|KiB|MiB|GiB)?$/i.exec(text.trim());
+  if (!m) throw new Error(`--size: expected a size such as 1GB, 500MB or 5MB, got "${text}"`);
+  const unit = (m[2] ?? 'B').toLowerCase();
+  const factor = { b: 1, kb: 1e3, mb: 1e6, gb: 1e9, kib: 1024, mib: 1024 ** 2, gib: 1024 ** 3 }[unit];
+  return Math.round(Number(m[1]) * factor);
+}
+
+function parseArgs(argv) {
+  const a = { size: 1e9, seed: 20240611, quick: false, workers: [1, 2], duckdb: true };
+  for (let i = 0; i < argv.length; i++) {
+    const w = argv[i];
+    const value = () => {
+      const v = argv[++i];
+      if (v === undefined) throw new Error(`${w}: expects a value`);
+      return v;
+    };
+    if (w === '--size') a.size = parseSize(value());
+    else if (w === '--seed') a.seed = Number(value());
+    else if (w === '--quick') a.quick = true;
+    else if (w === '--workers') a.workers = value().split(',').map(Number);
+    else if (w === '--no-duckdb') a.duckdb = false;
+    else throw new Error(`${w}: unknown option (options: --size, --seed, --quick, --workers, --no-duckdb)`);
+  }
+  if (a.quick) a.size = 2e6;
+  return a;
+}
+
+function label(bytes) {
+  return bytes >= 1e9 ? `${+(bytes / 1e9).toFixed(2)}GB` : `${+(bytes / 1e6).toFixed(2)}MB`;
+}
+
+/** The machine, and how much of it this run can use (other work on it slows parallel runs). */
+async function machine() {
+  const spin = `const { parentPort } = require('node:worker_threads'); let x = 0; const t = Date.now(); while (Date.now() - t < 400) for (let i = 0; i < 1e5; i++) x += i & 3; parentPort.postMessage(x);`;
+  const run = async (n) => {
+    const t0 = performance.now();
+    // Each worker spins for 400 ms of wall time; how many spin rounds they complete tells the capacity.
+    const counts = await Promise.all(Array.from({ length: n }, () => new Promise((res, rej) => {
+      const w = new Worker(spin, { eval: true });
+      w.once('message', res);
+      w.once('error', rej);
+    })));
+    void t0;
+    return counts.reduce((x, y) => x + y, 0);
+  };
+  const one = await run(1);
+  const two = await run(2);
+  return {
+    cpu: cpus()[0]?.model ?? 'unknown',
+    cores: availableParallelism(),
+    memoryGiB: +(totalmem() / 2 ** 30).toFixed(1),
+    freeGiB: +(freemem() / 2 ** 30).toFixed(1),
+    node: process.version,
+    platform: `${process.platform} ${process.arch}`,
+    loadAverage: loadavg().map((x) => +x.toFixed(2)),
+    // 2.0 on an idle 2-core machine; near 1.0 when other work holds the other core.
+    effectiveParallelism: +(two / one).toFixed(2),
+  };
+}
+
+function ensureFile(size, seed) {
+  mkdirSync(outDir, { recursive: true });
+  const path = join(outDir, `bench-${label(size)}-seed${seed}-v${GENERATOR_VERSION}.csv`);
+  if (existsSync(path) && statSync(path).size >= size && statSync(path).size < size + 4096) return { path, generatedMs: 0 };
+  const t0 = performance.now();
+  generateFile(path, size, seed);
+  return { path, generatedMs: Math.round(performance.now() - t0) };
+}
+
+async function rawRead(path) {
+  const t0 = performance.now();
+  let lines = 0;
+  let bytes = 0;
+  for await (const chunk of createReadStream(path, { highWaterMark: 1 << 20 })) {
+    bytes += chunk.length;
+    for (let i = chunk.indexOf(10); i >= 0; i = chunk.indexOf(10, i + 1)) lines++;
+  }
+  const s = (performance.now() - t0) / 1000;
+  return { seconds: +s.toFixed(3), mbPerSecond: +(bytes / MB / s).toFixed(1), lineBreaks: lines };
+}
+
+function runCli(path, workers, size) {
+  const rssFile = join(outDir, `.rss-${process.pid}-${workers}`);
+  const outFile = join(outDir, `profile-${label(size)}-w${workers}.json`);
+  return new Promise((resolvePromise, reject) => {
+    const t0 = performance.now();
+    const child = spawn(process.execPath, ['--import', pathToFileURL(join(root, 'bench', 'peak-rss.mjs')).href, cli, path, '--format', 'json', '-q', '--workers', String(workers)], {
+      env: { ...process.env, ASSAY_BENCH_RSS: rssFile },
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
+    const out = [];
+    let err = '';
+    child.stdout.on('data', (d) => out.push(d));
+    child.stderr.on('data', (d) => (err += d));
+    child.on('error', reject);
+    child.on('close', (code) => {
+      const s = (performance.now() - t0) / 1000;
+      if (code !== 0) return reject(new Error(`assay --workers ${workers} exited ${code}: ${err.trim()}`));
+      const json = Buffer.concat(out).toString('utf8');
+      writeFileSync(outFile, json);
+      const rssKb = existsSync(rssFile) ? Number(readFileSync(rssFile, 'utf8')) : NaN;
+      rmSync(rssFile, { force: true });
+      resolvePromise({
+        workers, seconds: +s.toFixed(3), mbPerSecond: +(size / MB / s).toFixed(1), peakRssMB: Math.round((rssKb * 1024) / MB),
+        note: err.trim() || undefined, profile: JSON.parse(json),
+      });
+    });
+  });
+}
+
+/** Which columns' members differ between two profiles (an empty list: identical). */
+function differences(a, b) {
+  const out = [];
+  for (const k of Object.keys(a)) if (k !== 'columns' && JSON.stringify(a[k]) !== JSON.stringify(b[k])) out.push(k);
+  a.columns.forEach((c, i) => {
+    const d = b.columns[i] ?? {};
+    for (const k of Object.keys(c)) if (JSON.stringify(c[k]) !== JSON.stringify(d[k])) out.push(`${c.name}.${k}${c.distinctExact === false ? ' (beyond the distinct cap)' : ''}`);
+  });
+  return out;
+}
+
+/** The main thread's event-loop delay while a worker thread (with its own range workers) profiles the file. */
+async function eventLoop(path, size, workers) {
+  // The histogram records the time between its 10 ms timer's runs: the delay is that minus 10 ms.
+  const RES = 10;
+  const h = monitorEventLoopDelay({ resolution: RES });
+  let maxGap = 0;
+  let last = performance.now();
+  const tick = setInterval(() => {
+    const now = performance.now();
+    maxGap = Math.max(maxGap, now - last - 10);
+    last = now;
+  }, 10);
+  const t0 = performance.now();
+  h.enable();
+  const reply = await new Promise((res, rej) => {
+    const w = new Worker(cli, { workerData: { assayProfile: { file: path, size, workers } } });
+    w.once('message', (m) => {
+      res(m);
+      void w.terminate();
+    });
+    w.once('error', rej);
+  });
+  h.disable();
+  clearInterval(tick);
+  if (reply.type !== 'profile') throw new Error(`event-loop run: ${reply.message}`);
+  const delay = (ns) => +Math.max(0, ns / 1e6 - RES).toFixed(1);
+  return {
+    workers, seconds: +((performance.now() - t0) / 1000).toFixed(3), rows: reply.profile.rows,
+    maxMs: delay(h.max), p99Ms: delay(h.percentile(99)), meanMs: delay(h.mean), maxTimerLagMs: +maxGap.toFixed(1),
+    histogramNs: { min: h.min, max: h.max, mean: Math.round(h.mean), p50: h.percentile(50), p99: h.percentile(99), resolutionMs: RES },
+  };
+}
+
+async function duckdb(path, size, threads) {
+  let api;
+  try {
+    api = await import('@duckdb/node-api');
+  } catch {
+    return { skipped: '@duckdb/node-api not installed' };
+  }
+  const instance = await api.DuckDBInstance.create(':memory:', { threads: String(threads) });
+  const connection = await instance.connect();
+  const t0 = performance.now();
+  const reader = await connection.runAndReadAll(`SUMMARIZE SELECT * FROM read_csv('${path.replaceAll("'", "''")}')`);
+  const s = (performance.now() - t0) / 1000;
+  return { threads, seconds: +s.toFixed(3), mbPerSecond: +(size / MB / s).toFixed(1), columns: reader.getRows().length };
+}
+
+function table(rows) {
+  const widths = rows[0].map((_, i) => Math.max(...rows.map((r) => String(r[i]).length)));
+  return rows.map((r) => r.map((c, i) => String(c).padEnd(widths[i])).join('  ')).join('\n');
+}
+
+async function main() {
+  const args = parseArgs(process.argv.slice(2));
+  if (!existsSync(cli)) throw new Error(`${cli} is missing: build first (node esbuild.mjs, or npm run bench)`);
+  const m = await machine();
+  const file = ensureFile(args.size, args.seed);
+  const size = statSync(file.path).size;
+  console.log(`assay benchmark: ${file.path} (${label(size)}${file.generatedMs ? `, generated in ${(file.generatedMs / 1000).toFixed(1)} s` : ', cached'})`);
+  console.log(`machine: ${m.cpu}, ${m.cores} cores, ${m.memoryGiB} GiB, Node ${m.node}; load ${m.loadAverage.join(' ')}; effective parallelism ${m.effectiveParallelism}`);
+
+  const raw = await rawRead(file.path);
+  const runs = [];
+  for (const w of args.workers) runs.push(await runCli(file.path, w, size));
+  const agree = runs.length > 1 ? differences(runs[0].profile, runs[runs.length - 1].profile) : [];
+  const loop = await eventLoop(file.path, size, Math.max(...args.workers));
+  const duck = args.duckdb ? await duckdb(file.path, size, Math.max(...args.workers)) : { skipped: 'not asked (--no-duckdb)' };
+  const best = runs.reduce((a, b) => (b.mbPerSecond > a.mbPerSecond ? b : a));
+
+  const rows = [['measure', 'seconds', 'MB/s', 'peak RSS MB', 'note']];
+  rows.push(['raw read (1 MiB chunks, count LF)', raw.seconds, raw.mbPerSecond, '', `${raw.lineBreaks} line breaks`]);
+  for (const r of runs) rows.push([`assay full profile, ${r.workers} worker${r.workers > 1 ? 's' : ''}`, r.seconds, r.mbPerSecond, r.peakRssMB, `${r.profile.rows} rows${r.note ? `; ${r.note}` : ''}`]);
+  if (runs.length > 1) {
+    const sp = runs[0].seconds / runs[runs.length - 1].seconds;
+    rows.push([`speed-up ${runs[0].workers} -> ${runs[runs.length - 1].workers} workers`, '', '', '', `${sp.toFixed(2)}x`]);
+  }
+  rows.push([`event loop during a ${loop.workers}-worker run`, loop.seconds, '', '', `delay max ${loop.maxMs} ms, p99 ${loop.p99Ms} ms, mean ${loop.meanMs} ms`]);
+  if ('skipped' in duck) rows.push(['@duckdb/node-api SUMMARIZE', '', '', '', `skipped: ${duck.skipped}`]);
+  else rows.push([`@duckdb/node-api SUMMARIZE, ${duck.threads} threads`, duck.seconds, duck.mbPerSecond, '', `assay/duckdb throughput ${(best.mbPerSecond / duck.mbPerSecond).toFixed(2)}x`]);
+  console.log('\n' + table(rows));
+  console.log(agree.length === 0 ? '\nprofiles of 1 and 2 workers: identical' : `\nprofiles of ${runs[0].workers} and ${runs[runs.length - 1].workers} workers differ in: ${agree.join(', ')}`);
+
+  const result = {
+    date: new Date().toISOString(), file: { path: file.path, bytes: size, seed: args.seed, generator: GENERATOR_VERSION, rows: runs[0].profile.rows },
+    machine: m, rawRead: raw,
+    profile: runs.map(({ profile, ...r }) => {
+      void profile;
+      return r;
+    }),
+    differences: agree, eventLoop: loop, duckdb: duck,
+  };
+  const json = join(outDir, `bench-${args.quick ? 'quick' : label(size)}.json`);
+  writeFileSync(json, JSON.stringify(result, null, 2) + '\n');
+  console.log(`figures written to ${json}`);
+}
+
+main().catch((e) => {
+  console.error(`bench: ${e instanceof Error ? e.message : String(e)}`);
+  process.exitCode = 1;
+});

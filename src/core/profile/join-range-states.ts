@@ -1,0 +1,26 @@
+// Joins the states of consecutive ranges (one per worker, in file order) into one, after checking
+// that every cut fell on a record boundary: a range that ends inside a record (inside quotes, or
+// mid-line) proves its cut wrong, and the caller then profiles the file in one pass instead.
+import type { JobState } from './job';
+import { mergeStates } from './merge-states';
+
+/**
+ * The merged state, or null when a range other than the last ends inside a record (or when the
+ * text has no line break, a case one pass reports on). `states` are consumed (the first one
+ * becomes the result).
+ * @example joinRangeStates([job0.end(), job1.end()]) // one state, as one pass over both ranges would give
+ */
+export function joinRangeStates(states: JobState[]): JobState | null {
+  for (let k = 0; k < states.length - 1; k++) {
+    const st = states[k]!;
+    if (st.scan.openLastLine || st.notices.some((n) => n.code === 'unterminated-quote')) return null;
+  }
+  let merged: JobState | null = null;
+  for (const [k, st] of states.entries()) {
+    if (k > 0) st.notices = st.notices.filter((n) => n.code !== 'empty');
+    merged = merged ? mergeStates(merged, st) : st;
+  }
+  // One pass warns about a long file without line breaks (one range could not have been cut).
+  if (merged && merged.scan.lineBreaks === 0 && merged.bytes > 64 * 1024) return null;
+  return merged;
+}
