@@ -1,6 +1,7 @@
 // Quick fixes for the tidiness flags (see core/editor/quick-fix.ts): each action replaces exactly
 // the one cell through a workspace edit, so the editor's undo restores it. Offered only while the
-// profile is of the document's current version (else the cell may have moved).
+// profile is of the document's current version (else the cell may have moved), and only in a
+// trusted workspace.
 import * as vscode from 'vscode';
 import { cellFixes } from '../../core/editor/quick-fix';
 import { DATA_LANGUAGES } from '../data-files';
@@ -16,6 +17,8 @@ export class QuickFixProvider implements vscode.CodeActionProvider {
 
   provideCodeActions(doc: vscode.TextDocument, range: vscode.Range | vscode.Selection, context: vscode.CodeActionContext): vscode.CodeAction[] {
     if (context.only !== undefined && !vscode.CodeActionKind.QuickFix.intersects(context.only)) return [];
+    // In Restricted Mode the extension only reads: no edits are offered, not even one-cell fixes.
+    if (!vscode.workspace.isTrusted) return [];
     const stored = this.store.get(doc.uri.toString());
     if (stored === undefined || stored.version !== doc.version) return [];
     const cell = cellAtPosition(doc, stored, range.start);
