@@ -184,6 +184,8 @@ async function main() {
     let failed = result?.failed ?? 0;
     if (result === null) { console.log('workbench: the suite reported no result'); failed = Math.max(failed, 1); }
     else if (outcome.code !== 0 && failed === 0) failed = 1;
+    // No network at run time: one request past the local server fails the run.
+    if (offHost.length > 0) { console.log('workbench: FAILED: requests left the local server'); failed += 1; }
     console.log(`${passed} passed, ${failed} failed`);
     return failed === 0 && outcome.code === 0 ? 0 : 1;
   } finally {
