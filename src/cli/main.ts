@@ -56,8 +56,13 @@ async function main(argv: string[]): Promise<number> {
       maxRecords: args.maxRecords,
     };
     if (args.bins !== undefined) input.bins = parseBinChoice(args.bins);
-    if (args.rules !== undefined) input.rules = { enabled: parseRules(args.rules), maxFlagsPerRule: args.maxFlags };
-    else if (args.maxFlags !== undefined) input.rules = { maxFlagsPerRule: args.maxFlags };
+    input.rules = {
+      ...args.thresholds,
+      ...(args.rules !== undefined ? { enabled: parseRules(args.rules) } : {}),
+      ...(args.maxFlags !== undefined ? { maxFlagsPerRule: args.maxFlags } : {}),
+    };
+    input.levels = args.levels as ProfileOptionsInput['levels'];
+    input.types = args.types as ProfileOptionsInput['types'];
     if (args.encoding !== undefined && !['utf-8', 'utf-16le', 'utf-16be', 'windows-1252'].includes(args.encoding)) {
       throw new OptionError(`--encoding: expected utf-8, utf-16le, utf-16be or windows-1252, got "${args.encoding}"`);
     }
@@ -95,6 +100,9 @@ async function main(argv: string[]): Promise<number> {
     }
     progress?.done();
     const { profile } = result;
+    // Content that is not delimited text is unreadable input: one line on stderr, status 2.
+    const refused = profile.notices.find((n) => n.code === 'not-delimited-text');
+    if (refused) return fail(`${file}: ${refused.message}`);
     write(profile, args.format, file, args.significantDigits);
     if (args.failOn.length > 0) {
       const reasons = failOnReasons(profile, args.failOn as FailOn[]);

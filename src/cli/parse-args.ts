@@ -18,6 +18,10 @@ export interface CliArgs {
   top?: number;
   missing?: string[];
   maxFlags?: number;
+  /** Rule thresholds given on the command line (names as in RuleOptions). */
+  thresholds: Record<string, number>;
+  levels: Record<string, string>;
+  types: Record<string, string>;
   maxRecords?: number;
   significantDigits?: number;
   /** Worker threads; undefined: 1 below 64 MB, else min(2, cores). */
@@ -53,6 +57,12 @@ Summaries
 Flags and constraints
   --rules LIST                  comma-separated rule ids to run, or all
   --max-flags N                 findings kept per rule and column (default 1000; totals still counted)
+  --tukey-k K, --tukey-far-k K  Tukey fence multipliers (default 1.5 and 3)
+  --modified-z M                modified z-score cut-off (default 3.5); --z Z: z-score cut-off (default 3)
+  --grubbs-alpha A              Grubbs' test level (default 0.05); --esd-max N, --esd-alpha A: generalized ESD
+  --near-constant S             share of one value that makes a column near-constant (default 0.99)
+  --level COLUMN=LEVEL          set a column's level: nominal, ordinal, interval or ratio (repeatable)
+  --type COLUMN=TYPE            set a column's type: integer, decimal, boolean, date, datetime, text
   --metadata PATH               CSV on the Web metadata (default: FILE-metadata.json or csv-metadata.json)
   --no-metadata                 do not look for metadata beside the file
   --fail-on LIST                exit 1 when any of: flags, invalid, constraints
@@ -66,6 +76,10 @@ Exit status: 0 done, 1 a --fail-on condition was met, 2 unreadable input or bad 
 `;
 
 const FORMATS = ['json', 'markdown', 'text'];
+const THRESHOLDS: Record<string, string> = {
+  '--tukey-k': 'tukeyK', '--tukey-far-k': 'tukeyFarK', '--modified-z': 'modifiedZThreshold', '--z': 'zThreshold',
+  '--grubbs-alpha': 'grubbsAlpha', '--esd-max': 'esdMaxOutliers', '--esd-alpha': 'esdAlpha', '--near-constant': 'nearConstantShare',
+};
 const FAIL_ON = ['flags', 'invalid', 'constraints'];
 
 function whole(name: string, v: string, min: number): number {
@@ -74,7 +88,7 @@ function whole(name: string, v: string, min: number): number {
 }
 
 export function parseArgs(argv: string[]): CliArgs {
-  const a: CliArgs = { format: 'text', groupBy: [], noMetadata: false, failOn: [], quiet: false, help: false, version: false };
+  const a: CliArgs = { format: 'text', groupBy: [], noMetadata: false, failOn: [], quiet: false, help: false, version: false, thresholds: {}, levels: {}, types: {} };
   for (let i = 0; i < argv.length; i++) {
     const word = argv[i]!;
     const eq = word.startsWith('--') ? word.indexOf('=') : -1;
@@ -123,6 +137,21 @@ export function parseArgs(argv: string[]): CliArgs {
       case '--quantile-type': a.quantileType = whole('--quantile-type', value(), 1); break;
       case '--top': a.top = whole('--top', value(), 1); break;
       case '--max-flags': a.maxFlags = whole('--max-flags', value(), 1); break;
+      case '--tukey-k': case '--tukey-far-k': case '--modified-z': case '--z': case '--grubbs-alpha':
+      case '--esd-max': case '--esd-alpha': case '--near-constant': {
+        const v = value();
+        const x = Number(v);
+        if (v.trim() === '' || !Number.isFinite(x) || x <= 0) throw new Error(`${name}: expected a positive number, got "${v}"`);
+        a.thresholds[THRESHOLDS[name]!] = x;
+        break;
+      }
+      case '--level': case '--type': {
+        const v = value();
+        const eq = v.lastIndexOf('=');
+        if (eq <= 0) throw new Error(`${name}: expected COLUMN=${name === '--level' ? 'LEVEL' : 'TYPE'}, got "${v}"`);
+        (name === '--level' ? a.levels : a.types)[v.slice(0, eq)] = v.slice(eq + 1).trim();
+        break;
+      }
       case '--max-records': a.maxRecords = whole('--max-records', value(), 1); break;
       case '--significant-digits': a.significantDigits = whole('--significant-digits', value(), 1); break;
       case '--workers': a.workers = whole('--workers', value(), 1); break;

@@ -9,6 +9,7 @@ import {
 } from '../infer/classify-cell';
 import type { KindCounts } from '../infer/infer-type';
 import { ByteDictionary, type DictionaryParts } from './byte-dictionary';
+import { GrowableCodes } from './growable-codes';
 import { hashBytes, HyperLogLog } from './hyper-log-log';
 
 export class GrowableFloat64 {
@@ -17,11 +18,11 @@ export class GrowableFloat64 {
   constructor(capacity = 1024) {
     this.data = new Float64Array(capacity);
   }
-  ensure(n: number): void {
+  ensure(n: number, exact = false): void {
     if (n <= this.data.length) return;
     let cap = Math.max(1024, this.data.length * 2);
     while (cap < n) cap *= 2;
-    const next = new Float64Array(cap);
+    const next = new Float64Array(exact ? n : cap);
     next.set(this.data.subarray(0, this.length));
     this.data = next;
   }
@@ -37,6 +38,16 @@ export class GrowableFloat64 {
 export class GrowableBytes {
   data: Uint8Array = new Uint8Array(1024);
   length = 0;
+  /** Appends `more` after making room for exactly that much (a merge knows its final size). */
+  pushAll(more: Uint8Array): void {
+    if (this.length + more.length > this.data.length) {
+      const next = new Uint8Array(this.length + more.length);
+      next.set(this.data.subarray(0, this.length));
+      this.data = next;
+    }
+    this.data.set(more, this.length);
+    this.length += more.length;
+  }
   push(v: number): void {
     if (this.length === this.data.length) {
       const next = new Uint8Array(Math.max(1024, this.data.length * 2));
@@ -46,22 +57,6 @@ export class GrowableBytes {
     this.data[this.length++] = v;
   }
   view(): Uint8Array {
-    return this.data.subarray(0, this.length);
-  }
-}
-
-export class GrowableInt32 {
-  data: Int32Array = new Int32Array(1024);
-  length = 0;
-  push(v: number): void {
-    if (this.length === this.data.length) {
-      const next = new Int32Array(Math.max(1024, this.data.length * 2));
-      next.set(this.data);
-      this.data = next;
-    }
-    this.data[this.length++] = v;
-  }
-  view(): Int32Array {
     return this.data.subarray(0, this.length);
   }
 }
@@ -78,7 +73,8 @@ export interface AccumulatorParts {
   kinds: Uint8Array;
   rows: number;
   values: Float64Array | null;
-  codes: Int32Array | null;
+  /** Code + 1 per row (see GrowableCodes). */
+  codes: Uint8Array | Uint16Array | Int32Array | null;
   distinct: number;
   wideTexts: [string, number][];
   categoryCounts: Float64Array;
@@ -108,7 +104,7 @@ export class ColumnAccumulator {
   /** Number, time or packed date per row; NaN where the cell has none. Allocated at the first such cell. */
   values: GrowableFloat64 | null = null;
   /** Category code per row (-1 for missing); dropped when the column has too many distinct values. */
-  codes: GrowableInt32 | null = new GrowableInt32();
+  codes: GrowableCodes | null = new GrowableCodes();
   /** Count per category code (codes number the distinct values in order of first appearance). */
   readonly categoryCounts: number[] = [];
   /** The distinct values keyed by their bytes; each entry's value is its category code. */
@@ -330,10 +326,8 @@ export class ColumnAccumulator {
       a.values.data = p.values;
       a.values.length = p.rows;
     }
-    if (p.codes) {
-      a.codes!.data = p.codes;
-      a.codes!.length = p.rows;
-    } else a.codes = null;
+    if (p.codes) a.codes!.adopt(p.codes, p.rows);
+    else a.codes = null;
     a.distinct = p.distinct;
     for (const [t, c] of p.wideTexts) a.wideTexts.set(t, c);
     for (const n of p.categoryCounts) a.categoryCounts.push(n);
@@ -353,21 +347,28 @@ export class ColumnAccumulator {
     return a;
   }
 
-  /** Appends another accumulator that holds the rows right after this one's. */
+  /**
+   * Appends another accumulator that holds the rows right after this one's. `other` is used up: its
+   * per-row arrays are let go as soon as they are copied, so that merging the ranges of a large
+   * file needs little more memory than the merged result.
+   */
   append(other: ColumnAccumulator): void {
     const base = this.rows;
-    const ok = other.kinds.view();
-    for (let i = 0; i < ok.length; i++) this.kinds.push(ok[i]!);
+    const otherRows = other.rows;
+    this.kinds.pushAll(other.kinds.view());
+    other.kinds.data = new Uint8Array(0);
+    other.kinds.length = 0;
     if (other.values || this.values) {
       if (!this.values) {
         this.values = new GrowableFloat64(Math.max(1024, base));
         this.values.data.fill(NaN, 0, base);
         this.values.length = base;
       }
-      const add = other.values ? other.values.view() : new Float64Array(other.rows).fill(NaN);
-      this.values.ensure(this.values.length + add.length);
+      const add = other.values ? other.values.view() : new Float64Array(otherRows).fill(NaN);
+      this.values.ensure(this.values.length + add.length, true);
       this.values.data.set(add, this.values.length);
       this.values.length += add.length;
+      other.values = null;
     }
     // Re-code the other side's values into this side's dictionary, in the order they were first
     // seen there (its entries are in that order), by their bytes: no text is made.
@@ -399,12 +400,14 @@ export class ColumnAccumulator {
       if (!this.capped) this.cap();
     }
     if (this.codes && other.codes) {
-      const oc = other.codes.view();
+      const oc = other.codes;
+      this.codes.reserve(this.codes.length + oc.length);
       for (let j = 0; j < oc.length; j++) {
-        const c = oc[j]!;
+        const c = oc.get(j);
         this.codes.push(c < 0 ? -1 : remap[c] ?? -1);
       }
     }
+    other.codes = null;
     if (this.capped) {
       this.fillHll();
       other.fillHll();

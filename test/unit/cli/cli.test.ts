@@ -55,6 +55,26 @@ describe('assay command line', () => {
     }
   });
 
+  it('refuses binary content with status 2', () => {
+    const gz = join(dir, 'renamed.csv');
+    writeFileSync(gz, new Uint8Array([0x1f, 0x8b, 8, 0, 0, 0, 0, 0, 0, 3, 1, 2, 3])); // gzip magic (RFC 1952)
+    const r = run([gz]);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/^assay: .*does not look like delimited text.*gzip/);
+  });
+
+  it('takes rule thresholds, levels and types as options', () => {
+    // 1..9 and 20: type-7 Q1 3.25, Q3 7.75, IQR 4.5; fences at k = 1.5: 14.5 (20 is out); at k = 3: 21.25 (20 is in).
+    const f = file('k.csv', 'v\n' + [1, 2, 3, 4, 5, 6, 7, 8, 9, 20].join('\n') + '\n');
+    const flagged = (args: string[]) => (JSON.parse(run([f, '--format', 'json', '--rules', 'tukey-fence', ...args]).stdout) as Profile).columns[0]!.flags.length;
+    expect(flagged([])).toBe(1);
+    expect(flagged(['--tukey-k', '3'])).toBe(0);
+    const p = JSON.parse(run([f, '--format', 'json', '--level', 'v=ordinal', '--type', 'v=decimal']).stdout) as Profile;
+    expect(p.columns[0]).toMatchObject({ level: 'ordinal', levelSource: 'option', type: 'decimal' });
+    expect(run([f, '--level', 'v=loud']).status).toBe(2);
+    expect(run([f, '--tukey-k', '-1']).status).toBe(2);
+  });
+
   it('compares groups with --group-by', () => {
     const p = JSON.parse(run([file('g.csv', 'g,x\na,1\na,3\nb,10\nb,14\nb,12\n'), '--group-by', 'g', '--format', 'json']).stdout) as Profile;
     // Hand-checkable: group b = 10, 12, 14 (mean 12, SD 2, median 12); a = 1, 3 (mean 2).
