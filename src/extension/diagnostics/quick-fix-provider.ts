@@ -1,7 +1,6 @@
 // Quick fixes for the tidiness flags (see core/editor/quick-fix.ts): each action replaces exactly
 // the one cell through a workspace edit, so the editor's undo restores it. Offered only while the
-// profile is of the document's current version (else the cell may have moved), and only in a
-// trusted workspace.
+// profile is of the document's current version (else the cell may have moved).
 import * as vscode from 'vscode';
 import { cellFixes } from '../../core/editor/quick-fix';
 import { DATA_LANGUAGES } from '../data-files';
