@@ -50,7 +50,7 @@ function header(ctx: PanelContext, c: ColumnProfile, flagsTarget: () => HTMLElem
   }
   actions.append(button('All columns', () => ctx.selectColumn(null, true), 'btn secondary'));
   const bar = el('div', { className: 'detail-head' }, heading, actions);
-  const why = el('p', { className: 'muted' }, `Type: ${visible(c.typeReason, 200)} Level: ${visible(c.levelReason, 200)}`);
+  const why = el('p', { className: 'muted' }, `Type: ${visible(c.typeReason, 200)}. Level: ${visible(c.levelReason, 200)}.`);
   const root = el('div', {}, bar, tags, why);
   const kinds = kindsLine(c);
   if (kinds) root.append(note(kinds, 'muted'));
