@@ -65,6 +65,11 @@ export interface ProfileOptions {
   rules: RuleOptions;
   /** Records after which the profile is marked partial and stops (first-pass view); null for all. */
   maxRecords: number | null;
+  /**
+   * Bytes a job may hold for its summaries (see RangeJob.heldBytes, which counts what assembling the
+   * profile will add): past it, reading stops and the profile says so; null for no ceiling.
+   */
+  memoryLimitBytes: number | null;
 }
 
 export const DEFAULT_MISSING_TOKENS: readonly string[] = ['', 'NA', 'N/A', 'n/a', 'na', 'null', 'NULL', 'Null', 'NaN', 'nan', '-', '?', 'None', '#N/A'];
@@ -158,6 +163,7 @@ export function resolveOptions(input: ProfileOptionsInput = {}): ProfileOptions 
     levels: Object.freeze(Object.assign(Object.create(null) as Record<string, Level>, input.levels)),
     rules,
     maxRecords: input.maxRecords ?? null,
+    memoryLimitBytes: input.memoryLimitBytes == null ? null : positive('memoryLimitBytes', input.memoryLimitBytes, true),
   };
   for (const [column, level] of Object.entries(options.levels)) {
     if (!['nominal', 'ordinal', 'interval', 'ratio'].includes(level)) throw new OptionError(`levels: "${column}" must be nominal, ordinal, interval or ratio, got "${String(level)}"`);

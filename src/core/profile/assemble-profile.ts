@@ -141,7 +141,8 @@ export function assembleProfile(st: JobState, read: ((offset: number, length: nu
   if (records.rows === 0 && st.dialect.header && st.columns.length > 0) {
     st.notices.push({ code: 'header-only', severity: 'warning', message: `The file has a header of ${st.columns.length} column${st.columns.length === 1 ? '' : 's'} but no data records.` });
   }
-  if (st.partial) {
+  // A job stopped at its memory ceiling is partial too, and says so itself: no exact profile follows.
+  if (st.partial && !st.notices.some((n) => n.code === 'memory-limit')) {
     st.notices.push({ code: 'partial', severity: 'information', message: `First pass: only the first ${records.rows} records were read. The exact profile follows.` });
   }
 

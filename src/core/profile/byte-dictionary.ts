@@ -35,16 +35,17 @@ export interface DictionaryParts {
  *   d.insert(b, 0, 4, hashBytes(b, 0, 4), 7); d.lookup(b, 0, 4, hashBytes(b, 0, 4)) // 7
  */
 export class ByteDictionary {
-  private table: Int32Array = new Int32Array(1024 * W);
-  private mask = 1023;
+  // Small at first (a file may have 100 000 columns of few values each); the table doubles at half full.
+  private table: Int32Array = new Int32Array(16 * W);
+  private mask = 15;
   /** Bit per value of the hash's top FILTER_BITS bits, set for every entry; null while small. */
   private filter: Int32Array | null = null;
-  arena: Uint8Array = new Uint8Array(4096);
+  arena: Uint8Array = new Uint8Array(64);
   arenaLength = 0;
-  starts: Int32Array = new Int32Array(256);
-  lengths: Int32Array = new Int32Array(256);
-  hashes: Uint32Array = new Uint32Array(256);
-  values: Int32Array = new Int32Array(256);
+  starts: Int32Array = new Int32Array(16);
+  lengths: Int32Array = new Int32Array(16);
+  hashes: Uint32Array = new Uint32Array(16);
+  values: Int32Array = new Int32Array(16);
   size = 0;
 
   /** The number stored with these bytes, or -1 when they are absent. Numbers must be >= 0. */
@@ -104,6 +105,12 @@ export class ByteDictionary {
     if (this.size * 2 > this.mask + 1) this.rehash((this.mask + 1) * 2);
     else this.place(k);
     return k;
+  }
+
+  /** Bytes of the arrays the dictionary holds (their capacity, not only what is used). */
+  heldBytes(): number {
+    return this.table.byteLength + (this.filter?.byteLength ?? 0) + this.arena.byteLength
+      + this.starts.byteLength + this.lengths.byteLength + this.hashes.byteLength + this.values.byteLength;
   }
 
   /** Entry k's bytes (a view into the arena). */

@@ -12,15 +12,21 @@ import { ByteDictionary, type DictionaryParts } from './byte-dictionary';
 import { GrowableCodes } from './growable-codes';
 import { hashBytes, HyperLogLog } from './hyper-log-log';
 
+/**
+ * Entries every per-row buffer starts with. Small, because a file of 100 000 columns makes 100 000
+ * accumulators before its first record; buffers double from here.
+ */
+const INITIAL = 16;
+
 export class GrowableFloat64 {
   data: Float64Array;
   length = 0;
-  constructor(capacity = 1024) {
+  constructor(capacity = INITIAL) {
     this.data = new Float64Array(capacity);
   }
   ensure(n: number, exact = false): void {
     if (n <= this.data.length) return;
-    let cap = Math.max(1024, this.data.length * 2);
+    let cap = Math.max(INITIAL, this.data.length * 2);
     while (cap < n) cap *= 2;
     const next = new Float64Array(exact ? n : cap);
     next.set(this.data.subarray(0, this.length));
@@ -36,7 +42,7 @@ export class GrowableFloat64 {
 }
 
 export class GrowableBytes {
-  data: Uint8Array = new Uint8Array(1024);
+  data: Uint8Array = new Uint8Array(INITIAL);
   length = 0;
   /** Appends `more` after making room for exactly that much (a merge knows its final size). */
   pushAll(more: Uint8Array): void {
@@ -50,7 +56,7 @@ export class GrowableBytes {
   }
   push(v: number): void {
     if (this.length === this.data.length) {
-      const next = new Uint8Array(Math.max(1024, this.data.length * 2));
+      const next = new Uint8Array(Math.max(INITIAL, this.data.length * 2));
       next.set(this.data);
       this.data = next;
     }
@@ -81,7 +87,8 @@ export interface AccumulatorParts {
   dictionary: DictionaryParts;
   capped: boolean;
   uncountedCells: number;
-  hll: Uint8Array;
+  /** Null until the column reached its cap (the sketch is allocated only then). */
+  hll: Uint8Array | null;
   hllFilled: boolean;
   tokenCounts: Float64Array;
   counts: KindCounts;
@@ -97,6 +104,8 @@ const encoder = new TextEncoder();
 const DAY_MS = 86_400_000;
 /** Values around the first one that the dense cache covers: 32 KiB of codes, small enough for L1/L2. */
 const DENSE = 8192;
+/** Rows before the dense cache is made: it costs 32 KiB, too much for each of very many short columns. */
+const DENSE_FROM = 1024;
 
 export class ColumnAccumulator {
   /** Kind per row (see classify-cell). */
@@ -122,10 +131,11 @@ export class ColumnAccumulator {
   /** Cells beyond the cap, still counted, whose value was not kept. */
   uncountedCells = 0;
   /**
-   * Distinct-value estimate, needed only once the column is capped: until then it is left empty and
-   * filled from the dictionary at the cap (the registers depend only on the set of hashes added).
+   * Distinct-value estimate, needed only once the column is capped: until then it does not exist
+   * (16 KiB per column) and is filled from the dictionary at the cap (the registers depend only on
+   * the set of hashes added).
    */
-  readonly hll = new HyperLogLog();
+  private sketch: HyperLogLog | null = null;
   hllFilled = false;
   readonly tokenCounts = new Float64Array(MAX_TOKENS);
   readonly counts: KindCounts = { integer: 0, decimal: 0, boolean: 0, date: 0, datetime: 0, slash: 0, text: 0, impossible: 0 };
@@ -142,6 +152,24 @@ export class ColumnAccumulator {
   private denseBase = 0;
 
   constructor(readonly classifier: CellClassifier, readonly limits: AccumulatorLimits) {}
+
+  /**
+   * Bytes this accumulator holds, plus what assembling its column will add (the typed values twice:
+   * row-indexed and sorted; the codes widened to 4 bytes per row). An estimate for the memory
+   * ceiling, counted from array capacities (JavaScript arrays at 8 bytes per entry).
+   */
+  heldBytes(): number {
+    const values = this.values?.data.byteLength ?? 0;
+    const codes = this.codes ? this.codes.data.byteLength : 0;
+    const held = this.kinds.data.byteLength + values + codes + this.dictionary.heldBytes()
+      + (this.sketch?.registers.byteLength ?? 0) + (this.dense?.byteLength ?? 0) + this.categoryCounts.length * 8;
+    return held + 2 * values + (this.codes ? 4 * this.codes.length : 0);
+  }
+
+  /** The distinct-value sketch (made on first use; see `sketch`). */
+  get hll(): HyperLogLog {
+    return (this.sketch ??= new HyperLogLog());
+  }
 
   get rows(): number {
     return this.kinds.length;
@@ -192,18 +220,18 @@ export class ColumnAccumulator {
     } else {
       this.values?.push(NaN);
     }
-    if (this.hllFilled) this.hll.addHash(hash);
+    if (this.hllFilled) this.sketch!.addHash(hash);
     let code: number;
     if (canonical) {
       // The value determines the bytes: its code can be cached by value.
       const key = kind === KIND_DATE ? value / DAY_MS : value;
-      if (this.dense === null) {
+      if (this.dense === null && this.kinds.length >= DENSE_FROM) {
         this.dense = new Int32Array(DENSE).fill(-1);
         this.denseKind = kind;
         this.denseBase = key - DENSE / 2;
       }
       const at = key - this.denseBase;
-      if (kind === this.denseKind && at >= 0 && at < DENSE) {
+      if (this.dense !== null && kind === this.denseKind && at >= 0 && at < DENSE) {
         code = this.dense[at]!;
         if (code < 0) {
           code = this.code(bytes, start, end, hash);
@@ -225,7 +253,7 @@ export class ColumnAccumulator {
 
   private startValues(): void {
     const row = this.kinds.length - 1;
-    this.values = new GrowableFloat64(Math.max(1024, row + 1));
+    this.values = new GrowableFloat64(Math.max(INITIAL, row + 1));
     this.values.data.fill(NaN, 0, row);
     this.values.length = row;
   }
@@ -309,7 +337,7 @@ export class ColumnAccumulator {
       categoryCounts: Float64Array.from(this.categoryCounts),
       dictionary: this.dictionary.toParts(),
       capped: this.capped, uncountedCells: this.uncountedCells,
-      hll: this.hll.registers, hllFilled: this.hllFilled,
+      hll: this.sketch ? this.sketch.registers : null, hllFilled: this.hllFilled,
       tokenCounts: this.tokenCounts, counts: { ...this.counts },
       missing: this.missing, absent: this.absent, spaced: this.spaced,
       dense: this.dense, denseKind: this.denseKind, denseBase: this.denseBase,
@@ -334,7 +362,7 @@ export class ColumnAccumulator {
     a.dictionary.fromParts(p.dictionary);
     a.capped = p.capped;
     a.uncountedCells = p.uncountedCells;
-    a.hll.registers.set(p.hll);
+    if (p.hll) a.hll.registers.set(p.hll);
     a.hllFilled = p.hllFilled;
     a.tokenCounts.set(p.tokenCounts);
     Object.assign(a.counts, p.counts);

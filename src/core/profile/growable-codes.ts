@@ -7,7 +7,7 @@
  * @example const c = new GrowableCodes(); c.push(3); c.push(-1); c.push(70000); c.view() // Int32Array [3, -1, 70000]
  */
 export class GrowableCodes {
-  data: Uint8Array | Uint16Array | Int32Array = new Uint8Array(1024);
+  data: Uint8Array | Uint16Array | Int32Array = new Uint8Array(16);
   length = 0;
   private max = 0xff;
 
@@ -51,7 +51,7 @@ export class GrowableCodes {
   }
 
   private grow(capacity: number): void {
-    const cap = Math.max(1024, capacity);
+    const cap = Math.max(16, capacity);
     const next = this.data instanceof Uint8Array ? new Uint8Array(cap) : this.data instanceof Uint16Array ? new Uint16Array(cap) : new Int32Array(cap);
     next.set(this.data.subarray(0, this.length));
     this.data = next;

@@ -28,6 +28,8 @@ const MAX_KEPT_TRANSCODED = 256 * 1024 * 1024;
  * without line breaks, or the wrong delimiter), and each column holds its own summaries.
  */
 export const MAX_COLUMNS = 200_000;
+/** Bytes read between checks of the memory ceiling. */
+const MEMORY_CHECK_STEP = 1 << 20;
 
 export interface RecordState {
   rows: number;
@@ -102,12 +104,16 @@ export class RangeJob {
   private readonly cells: (string | null)[] = [];
   private readonly hash = { hi: 0, lo: 0 };
   private readonly scanner: RecordScanner;
+  /** `state.bytes` when the memory ceiling was last checked (checks cost O(columns)). */
+  private checkedAt = 0;
+  private readonly startOffset: number;
 
   constructor(plan: RangePlan) {
     const bd = byteDialect({ delimiter: plan.dialect.delimiter, quote: plan.dialect.quote });
     const options = plan.options;
     this.scanner = new RecordScanner(bd, (r) => this.onRecord(r), { startOffset: plan.startOffset });
     this.headerPending = plan.names === null;
+    this.startOffset = plan.startOffset;
     this.state = {
       options, source: plan.source, encoding: plan.encoding, bom: plan.bomLength > 0, bomLength: plan.bomLength,
       dialect: plan.dialect, byteDialect: bd, names: [], headerNotes: [], notices: [], columns: [],
@@ -125,15 +131,19 @@ export class RangeJob {
     }
   }
 
+  /** Refuses a first record that is too wide, rather than build one set of summaries per field: stops reading, and says why. */
+  private refuseWidth(fields: number): void {
+    this.state.notices.push({
+      code: 'too-many-columns', severity: 'error', line: 1,
+      message: `The first record has ${fields} fields; Assay profiles at most ${MAX_COLUMNS} columns, so nothing was profiled. A file without line breaks, or read with the wrong delimiter, looks like this.`,
+    });
+    this.full = true;
+  }
+
   private setColumns(names: string[]): void {
     const st = this.state;
     if (names.length > MAX_COLUMNS) {
-      // Refuse rather than build one set of summaries per field: stop reading, and say why.
-      st.notices.push({
-        code: 'too-many-columns', severity: 'error', line: 1,
-        message: `The first record has ${names.length} fields; Assay profiles at most ${MAX_COLUMNS} columns, so nothing was profiled. A file without line breaks, or read with the wrong delimiter, looks like this.`,
-      });
-      this.full = true;
+      this.refuseWidth(names.length);
       return;
     }
     st.names = names;
@@ -149,6 +159,31 @@ export class RangeJob {
     if (this.full || utf8.length === 0) return;
     this.state.bytes += utf8.length;
     this.scanner.push(utf8);
+    const limit = this.state.options.memoryLimitBytes;
+    if (limit !== null && !this.full && this.state.bytes - this.checkedAt >= MEMORY_CHECK_STEP) {
+      this.checkedAt = this.state.bytes;
+      if (this.heldBytes() > limit) this.stopAtLimit(limit);
+    }
+  }
+
+  /** What the job holds now, and what assembling will add (see ColumnAccumulator.heldBytes). */
+  heldBytes(): number {
+    const rec = this.state.records;
+    let total = rec.offsets.data.byteLength + rec.lines.data.byteLength + rec.seen.rows.byteLength * 3;
+    for (const c of this.state.columns) total += c.heldBytes();
+    return total;
+  }
+
+  /** Stops reading once the ceiling is passed: a partial profile of the records so far, and an error that says why. */
+  private stopAtLimit(limit: number): void {
+    const st = this.state;
+    this.full = true;
+    st.partial = true;
+    const mb = (n: number) => Math.round(n / (1 << 20));
+    st.notices.push({
+      code: 'memory-limit', severity: 'error',
+      message: `Reading stopped near byte ${this.startOffset + st.bytes} of the text: the summaries would need about ${mb(this.heldBytes())} MB, above the memory limit of ${mb(limit)} MB. The profile covers only the records before that point. Raise the limit (setting assay.memoryLimitMB; --memory-limit on the command line) or profile a part of the file.`,
+    });
   }
 
   /** Ends the range and copies the scanner's totals into the state. */
@@ -182,6 +217,11 @@ export class RangeJob {
     }
     if (this.headerPending) {
       this.headerPending = false;
+      // Checked before any name is made: a refused record may hold millions of fields.
+      if (r.fieldCount > MAX_COLUMNS) {
+        this.refuseWidth(r.fieldCount);
+        return;
+      }
       const raw: string[] = [];
       for (let i = 0; i < r.fieldCount; i++) raw.push(r.text(i));
       if (st.declared) compileDeclared(st.declared, st.dialect.header ? raw : null, st.notices);
@@ -189,7 +229,7 @@ export class RangeJob {
       st.headerNotes = notes;
       this.setColumns(names);
       this.scanner.keepBlankLines = names.length === 1;
-      if (st.dialect.header) return;
+      if (st.dialect.header || this.full) return;
     }
     const rec = st.records;
     rec.rows++;

@@ -11,6 +11,10 @@ import { mergeStates } from './merge-states';
  * @example joinRangeStates([job0.end(), job1.end()]) // one state, as one pass over both ranges would give
  */
 export function joinRangeStates(states: JobState[]): JobState | null {
+  // A range stopped at its share of the memory ceiling: the ranges after it would leave a gap, so
+  // the profile is of the records up to that stop, as one pass stopping there would give.
+  const stop = states.findIndex((st) => st.notices.some((n) => n.code === 'memory-limit'));
+  if (stop >= 0) states = states.slice(0, stop + 1);
   for (let k = 0; k < states.length - 1; k++) {
     const st = states[k]!;
     if (st.scan.openLastLine || st.notices.some((n) => n.code === 'unterminated-quote')) return null;

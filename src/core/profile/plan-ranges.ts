@@ -3,7 +3,7 @@
 // UTF-8 text is cut (other encodings are re-encoded as a stream); CSV on the Web declarations and
 // first-pass limits need one pass too. The caller falls back to one range when `planRanges` says so.
 import type { JobSource } from '../engine';
-import type { ProfileOptions } from '../options';
+import { resolveOptions, type ProfileOptions } from '../options';
 import { byteDialect } from '../read/byte-dialect';
 import { detectEncoding } from '../read/detect-encoding';
 import { RecordScanner } from '../read/record-scanner';
@@ -48,10 +48,13 @@ export function planRanges(
   const firstCut = bom + header.end;
   const cuts = splitFileAtRecords(read, size, bom, parts, bd, split).filter((c, i) => i === 0 || c > firstCut);
   if (cuts.length < 2 && parts > 1) return { fallback: 'the file is too small to split' };
+  // Each range holds its own summaries until they are merged: the ceiling is shared out among them.
+  const limit = options.memoryLimitBytes;
+  const rangeOptions = limit === null ? options : resolveOptions({ ...options, rules: { ...options.rules }, memoryLimitBytes: Math.max(1, Math.floor(limit / cuts.length)) });
   const tasks = cuts.map((from, i): RangeTask => ({
     from,
     to: cuts[i + 1] ?? size,
-    plan: { options, source, encoding: 'utf-8', bomLength: bom, dialect, names: i === 0 ? null : names, startOffset: from - bom, declared: null },
+    plan: { options: rangeOptions, source, encoding: 'utf-8', bomLength: bom, dialect, names: i === 0 ? null : names, startOffset: from - bom, declared: null },
   }));
   return { tasks };
 }

@@ -61,6 +61,8 @@ export function parseSettings(get: (key: string) => unknown): ParsedSettings {
       missingTokens: v('missingTokens') as string[],
       topN: v('topN') as number,
       levels: v('levels') as Record<string, Level>,
+      // 0: no ceiling.
+      memoryLimitBytes: (v('memoryLimitMB') as number) === 0 ? null : (v('memoryLimitMB') as number) * 1024 * 1024,
       rules: {
         enabled: v('rules.enabled') as RuleId[],
         tukeyK: v('rules.tukeyK') as number,

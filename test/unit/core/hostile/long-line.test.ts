@@ -56,4 +56,15 @@ describe('one line of 300 MB with no line break', () => {
     );
     expect(p.notices.some((n) => n.code === 'no-line-break')).toBe(true);
   }, 240_000);
+
+  it('a refused first record is not counted as a data record when the file has no header', () => {
+    // 200 001 fields and a line break, then one ordinary line: nothing is profiled, and nothing is
+    // counted as read (the refused record once counted as a row of zero columns).
+    const wide = new TextEncoder().encode('1,'.repeat(200_000) + '1\n2\n');
+    const job = createProfileJob(resolveOptions({ header: false }), { name: 'wide.csv' });
+    job.push(wide);
+    const p = job.finish().profile;
+    expect([p.rows, p.columns.length]).toEqual([0, 0]);
+    expect(p.notices.find((n) => n.code === 'too-many-columns')?.message).toContain('The first record has 200001 fields');
+  });
 });

@@ -3,7 +3,7 @@
 // the definitions they use (Hyndman & Fan 1996 type 7 for the median). The time bounds are hang
 // detectors for a loaded 2-core machine, not benchmarks. Slow: about 30 s for the rows here.
 // ASSAY_HOSTILE_ROWS overrides the row count (e.g. 2000000 on a slow machine); ASSAY_HOSTILE_FULL=1
-// also runs the 100 000-column case, which today needs minutes and about 10 GB (see the `fails` test).
+// also runs the 17-million-record case. The 100 000-column case takes about 10 s here.
 import { describe, expect, it } from 'vitest';
 import { createProfileJob, type ProfileJob } from '../../../../src/core/engine';
 import { resolveOptions } from '../../../../src/core/options';
@@ -78,13 +78,11 @@ describe('wide files', () => {
     expect([(last.stats as NumericStats).min, (last.stats as NumericStats).max]).toEqual([8, 70]);
   }, 180_000);
 
-  // FAILS TODAY (left for the owner of column-accumulator.ts / byte-dictionary.ts / hyper-log-log.ts):
-  // each ColumnAccumulator allocates about 100 KiB before its first cell (a 16 KiB HyperLogLog
-  // register array, the dictionary's hash table and arena, kind/code buffers of 1024 entries), so
-  // 100 000 columns take about 10 GB and minutes. Fix: allocate the sketch only when the dictionary
-  // reaches its cap (filling it from the dictionary then), and start every buffer small (16 entries,
-  // doubling). Remove `.fails` once a column costs under 4 KiB before its data.
-  it.fails('a column costs under 4 KiB of buffers before its data grows', () => {
+  // Each accumulator once allocated about 100 KiB before its first cell (a 16 KiB HyperLogLog
+  // register array, a 32 KiB dense code cache, the dictionary's table and arena, buffers of 1024
+  // entries), so 100 000 columns took about 10 GB and minutes. The sketch is now made at the cap,
+  // the cache after 1024 rows, and every buffer starts at 16 entries.
+  it('a column costs under 4 KiB of buffers before its data grows', () => {
     const columns = 200;
     const text = enc.encode(Array.from({ length: columns }, (_, j) => `c${j}`).join(',') + '\n' + '1,'.repeat(columns - 1) + '1\n');
     const job = new RangeJob({ options, source: { name: 'wide.csv' }, encoding: 'utf-8', bomLength: 0, dialect: planDialect(text, options), names: null, startOffset: 0, declared: null });
@@ -96,7 +94,7 @@ describe('wide files', () => {
     expect(bufferBytes(st.columns) / columns).toBeLessThan(4096);
   });
 
-  it.runIf(FULL)('100 000 columns: every column profiled, in bounded time', () => {
+  it('100 000 columns: every column profiled, in bounded time', () => {
     const { profile, seconds } = wide(100_000, 3);
     expect(seconds).toBeLessThan(300);
     expect(profile.columns).toHaveLength(100_000);
@@ -127,16 +125,11 @@ describe(`tall files (slow): ${ROWS} one-column rows`, () => {
 });
 
 describe('exact-duplicate records among millions of distinct ones', () => {
-  // FAILS TODAY (left for the owner of add-record-cells.ts / record-key-set.ts): the record key is
-  // said to have 52 bits, but both of its words are mixed from the same 32-bit hash of each cell, so
-  // a one-column record has 32 bits of key. Among n distinct values about n^2 / 2^33 pairs collide
-  // (birthday bound): about 120 for 1 million, 34 000 for 17 million (27 426 seen here). Candidates
-  // are checked against the bytes only when the job can read them back, and only the first
-  // 4 x maxFlagsPerRule of them, so the rest stay counted in `duplicateRecords`: without `readRecord`
-  // (as here), or past about 5 million distinct one-column records with it. Fix: hash each cell with
-  // two independent seeds (one per key word), and report only confirmed duplicates (or say how many
-  // candidates were not checked). Remove `.fails` then.
-  it.fails('1 million distinct one-column records, profiled without reading back: no duplicate reported', () => {
+  // Both words of the record key were once mixed from the same 32-bit hash of each cell, so a
+  // one-column record had 32 bits of key: among n distinct values about n^2 / 2^33 pairs collide
+  // (birthday bound): about 120 for 1 million (this test then failed), 34 000 for 17 million. Each
+  // cell now has a second, independent hash for the second word: 52 bits, n^2 / 2^53 expected pairs.
+  it('1 million distinct one-column records, profiled without reading back: no duplicate reported', () => {
     let text = 'id\n';
     const parts: string[] = [];
     for (let i = 0; i < 1_000_000; i++) parts.push(`${i * 7919}\n`);
@@ -156,7 +149,7 @@ describe('more distinct records than a JavaScript Map holds (2^24 in V8)', () =>
     const job = createProfileJob(options, { name: 'distinct.csv' });
     pushLines(job, 'id\n', 17_000_000, (i) => `${i}\n`);
     const { profile } = job.finish();
-    // Only the count is checked: duplicate candidates are a known issue (see the test above).
-    expect(profile.rows).toBe(17_000_000);
+    // 17e6^2 / 2^53 ≈ 0.03 false pairs expected with a 52-bit key (birthday bound).
+    expect([profile.rows, profile.duplicateRecords]).toEqual([17_000_000, 0]);
   }, 900_000);
 });

@@ -63,6 +63,13 @@ describe('parseSettings', () => {
     expect(fallback.ok && settings.values[key]).toEqual(fallback.ok && fallback.value);
   });
 
+  it('turns assay.memoryLimitMB into the job ceiling in bytes (4096 MB by default; 0: none)', () => {
+    expect(parse({}).settings.options.memoryLimitBytes).toBe(4096 * 1024 * 1024);
+    expect(parse({ memoryLimitMB: 512 }).settings.options.memoryLimitBytes).toBe(512 * 1024 * 1024);
+    expect(parse({ memoryLimitMB: 0 }).settings.options.memoryLimitBytes).toBeNull();
+    expect(parse({ memoryLimitMB: -1 }).problems).toEqual(['assay.memoryLimitMB: expected a whole number from 0 to 1048576, got -1; using 4096']);
+  });
+
   it('names unknown rule ids', () => {
     const { problems, settings } = parse({ 'rules.enabled': ['tukey-fence', 'gut-feeling'] });
     expect(problems[0]).toMatch(/^assay\.rules\.enabled: expected rule ids from: .* \(unknown: gut-feeling\), got \["tukey-fence","gut-feeling"\]; using /);

@@ -56,4 +56,17 @@ describe('nodeWorkerPort', () => {
     await expect(job.result).rejects.toMatchObject({ reason: 'stopped' });
     client.dispose();
   }, 60_000);
+
+  it('a worker whose heap fills up fails the job with a message that says so (ERR_WORKER_OUT_OF_MEMORY, Node docs)', async () => {
+    // A stand-in worker that only fills its heap: 16 MB of old generation goes in well under a second.
+    const hog = join(dir, 'hog.js');
+    writeFileSync(hog, 'const keep = []; for (;;) keep.push({ a: [1, 2, 3], b: String(keep.length) });\n');
+    const client = new WorkerClient(() => nodeWorkerPort(hog, { maxOldGenerationSizeMb: 16, maxYoungGenerationSizeMb: 4 }));
+    const job = client.profile({
+      uri: 'file:///x.csv', version: 0, name: null, size: null, options: toWireOptions(resolveOptions({})),
+      input: { kind: 'text', text: 'a\n1\n' }, firstPass: null, chunkBytes: 64,
+    });
+    await expect(job.result).rejects.toMatchObject({ reason: 'stopped', message: expect.stringContaining('the profiling worker ran out of memory') as unknown });
+    client.dispose();
+  }, 60_000);
 });
