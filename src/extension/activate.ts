@@ -16,6 +16,7 @@ import { followCursor } from './panel/follow-cursor';
 import { PanelManager } from './panel/panel-manager';
 import type { Platform } from './platform';
 import { DocumentProfiler } from './profiling/document-profiler';
+import { JobLedger } from './profiling/job-ledger';
 import { ProfileStore } from './profiling/profile-store';
 import { ReportSaver } from './report/save-report';
 import { StatusBar } from './status/status-bar';
@@ -31,7 +32,8 @@ export function activateAssay(context: vscode.ExtensionContext, platform: Platfo
 
   const log = extension.add(vscode.window.createOutputChannel('Assay', { log: true }));
   const config = extension.add(new Configuration());
-  const workers = countedStart(platform.workerStarter(context.extensionUri));
+  const jobs = new JobLedger();
+  const workers = countedStart(jobs.watch(platform.workerStarter(context.extensionUri)));
   const worker = extension.add(new WorkerClient(workers.start));
   const store = extension.add(new ProfileStore());
   const profiler = extension.add(new DocumentProfiler(worker, store, config, platform, log));
@@ -109,7 +111,7 @@ export function activateAssay(context: vscode.ExtensionContext, platform: Platfo
 
   onActive();
   for (const e of vscode.window.visibleTextEditors) if (isDataLanguage(e.document.languageId)) profiler.ensure(e.document.uri);
-  const testApi = createTestApi({ store, panels, status, liveWorkers: () => workers.live() });
+  const testApi = createTestApi({ store, panels, status, liveWorkers: () => workers.live(), jobs, profiler, worker });
   extension.add(testApi.subscription);
 
   return { __test: testApi.api };

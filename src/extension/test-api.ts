@@ -3,9 +3,13 @@
 import type { Profile } from '../core/profile/types';
 import type { PanelManager } from './panel/panel-manager';
 import type { RenderedInfo } from './panel/profile-panel';
+import type { DocumentProfiler } from './profiling/document-profiler';
+import type { JobCounts, JobLedger } from './profiling/job-ledger';
 import type { ProfileStore } from './profiling/profile-store';
 import type { StatusBar } from './status/status-bar';
 import type { Disposable } from './util/disposable-list';
+import type { WorkerClient } from './worker/worker-client';
+import { WorkerRequestError } from './worker/worker-client';
 
 export interface AssayTestApi {
   /** The last `rendered` message a panel posted (kept after the panel closes). */
@@ -26,6 +30,14 @@ export interface AssayTestApi {
   panelColumn(): string | null | undefined;
   /** Hands a message to the open panel's handler as if its webview had posted it. */
   panelMessage(message: unknown): Promise<void>;
+  /** Profiling jobs for a URI since activation, as read off the wire to the worker. */
+  jobs(uri: string): JobCounts;
+  /** Jobs the worker holds (running or asked to stop and not yet ended), over every document. */
+  jobsInWorker(): number;
+  /** Runs the profiler began for a URI since activation (each posts at most one job). */
+  profilerRuns(uri: string): number;
+  /** Whether the worker still keeps a profile session for the URI (asks it; false with no worker alive). */
+  workerKeeps(uri: string): Promise<boolean>;
 }
 
 export interface AssayExports {
@@ -38,6 +50,9 @@ interface TestApiDeps {
   panels: PanelManager;
   status: StatusBar;
   liveWorkers(): number;
+  jobs: JobLedger;
+  profiler: DocumentProfiler;
+  worker: WorkerClient;
 }
 
 /** Builds the test API; the returned disposable ends its bookkeeping (the profile history). */
@@ -64,6 +79,27 @@ export function createTestApi(deps: TestApiDeps): { api: AssayTestApi; subscript
     panelUri: () => panels.uri,
     panelColumn: () => panels.current?.column,
     panelMessage: (m) => panels.current?.receive(m) ?? Promise.resolve(),
+    jobs: (uri) => deps.jobs.of(uri),
+    jobsInWorker: () => deps.jobs.inWorker,
+    profilerRuns: (uri) => deps.profiler.runCount(uri),
+    workerKeeps: (uri) => workerKeeps(deps.worker, uri),
   };
   return { api, subscription };
+}
+
+/**
+ * Asks the worker where 0 stands in a column of the document: it answers `no-profile` exactly when it
+ * keeps no session for the URI (any other answer, an unknown column's included, means it keeps one).
+ * With no worker alive nothing is kept, and no worker is started to ask.
+ */
+async function workerKeeps(worker: WorkerClient, uri: string): Promise<boolean> {
+  if (!worker.alive) return false;
+  try {
+    await worker.standing(uri, 0, '', 0, 10_000);
+    return true;
+  } catch (e) {
+    if (e instanceof WorkerRequestError && e.reason === 'no-profile') return false;
+    if (e instanceof WorkerRequestError && e.reason === 'error') return true;
+    throw e;
+  }
 }

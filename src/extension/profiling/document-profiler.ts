@@ -13,8 +13,11 @@ import { WorkerRequestError } from '../worker/worker-client';
 import { findMetadata } from './find-metadata';
 import type { ProfileStore } from './profile-store';
 
-const EDIT_DEBOUNCE_MS = 300;
+/** The pause in editing after which a file is profiled again (exported for the workbench suite). */
+export const EDIT_DEBOUNCE_MS = 300;
 const CHUNK_BYTES = 1 << 20;
+/** How long a file with no document yet waits for one before it is read from disk. */
+const DOCUMENT_WAIT_MS = 500;
 
 interface Tracked {
   uri: vscode.Uri;
@@ -23,6 +26,8 @@ interface Tracked {
   timer: ReturnType<typeof setTimeout> | null;
   /** Version of the last job started (so `ensure` does not start the same one twice). */
   startedVersion: number | null;
+  /** Generation of the run still preparing or running its job, else null (`ensure` waits for it). */
+  runGeneration: number | null;
 }
 
 function findDocument(uri: vscode.Uri): vscode.TextDocument | undefined {
@@ -32,6 +37,8 @@ function findDocument(uri: vscode.Uri): vscode.TextDocument | undefined {
 
 export class DocumentProfiler implements vscode.Disposable {
   private readonly tracked = new Map<string, Tracked>();
+  /** Runs begun per URI since activation (kept after untracking; the workbench suite reads it). */
+  private readonly runs = new Map<string, number>();
   private readonly subscriptions: vscode.Disposable[] = [];
   private disposed = false;
 
@@ -66,6 +73,11 @@ export class DocumentProfiler implements vscode.Disposable {
     return this.tracked.has(uri.toString());
   }
 
+  /** How many runs (each ending in at most one worker job) began for the URI since activation. */
+  runCount(uri: string): number {
+    return this.runs.get(uri) ?? 0;
+  }
+
   trackedUris(): vscode.Uri[] {
     return [...this.tracked.values()].map((t) => t.uri);
   }
@@ -76,12 +88,27 @@ export class DocumentProfiler implements vscode.Disposable {
     const key = uri.toString();
     let t = this.tracked.get(key);
     if (t === undefined) {
-      t = { uri, generation: 0, job: null, timer: null, startedVersion: null };
+      t = { uri, generation: 0, job: null, timer: null, startedVersion: null, runGeneration: null };
       this.tracked.set(key, t);
     }
+    // An edit's pause is still running: its run comes (a tab turning dirty calls here mid-burst).
+    if (t.timer !== null) return;
     const doc = findDocument(uri);
     const version = doc?.version ?? 0;
-    if (t.startedVersion === version && (t.job !== null || this.store.get(key)?.version === version)) return;
+    // A run still reading the file or finding its metadata has posted no job yet but counts as running
+    // (else a restored panel and the active editor, both ensuring at activation, start two runs).
+    const running = t.job !== null || t.runGeneration === t.generation;
+    if (t.startedVersion === version && (running || this.store.get(key)?.version === version)) return;
+    if (doc === undefined) {
+      // A tab restored at startup shows the file before its document reaches the extension host: a
+      // short wait lets it arrive, so the file is profiled once from it, not from disk and then again.
+      // (A file too large to become a document is merely profiled that much later.)
+      t.timer = setTimeout(() => {
+        t.timer = null;
+        void this.run(t);
+      }, DOCUMENT_WAIT_MS);
+      return;
+    }
     void this.run(t);
   }
 
@@ -124,7 +151,9 @@ export class DocumentProfiler implements vscode.Disposable {
     if (this.disposed) return;
     this.stopJob(t);
     const generation = ++t.generation;
+    t.runGeneration = generation;
     const key = t.uri.toString();
+    this.runs.set(key, (this.runs.get(key) ?? 0) + 1);
     const doc = findDocument(t.uri);
     const version = doc?.version ?? 0;
     t.startedVersion = version;
@@ -189,6 +218,8 @@ export class DocumentProfiler implements vscode.Disposable {
       const message = e instanceof Error ? e.message : String(e);
       this.log.error(`profiling ${key} (version ${version}) failed: ${message}`);
       if (!stale()) this.store.setFailed(key, version, message);
+    } finally {
+      if (t.runGeneration === generation) t.runGeneration = null;
     }
   }
 

@@ -4,7 +4,7 @@
 import * as vscode from 'vscode';
 import { flagCount } from '../../../src/extension/status/status-text';
 import { deepEqual, equal, ok } from './expect';
-import { assayApi, closeAllEditors, fixtureUri, openFixture, setSetting, sleep, waitFor } from './helpers';
+import { assayApi, closeAllEditors, fixtureUri, openFixture, setSetting, sleep, waitFor, writePiDigits } from './helpers';
 
 async function finalProfile(uri: vscode.Uri, version: number) {
   const api = await assayApi();
@@ -105,10 +105,7 @@ suite('profiling', () => {
     const api = await assayApi();
     await closeAllEditors();
     // Larger than the engine's 64 KiB sniffing head, so that the first pass can fill before the end.
-    const digits = new TextDecoder().decode(await vscode.workspace.fs.readFile(fixtureUri('pi-digits.csv'))).split('\n').slice(1).filter((l) => l !== '');
-    equal(digits.length, 5000, 'PiDigits values (NIST StRD: n = 5000)');
-    const big = fixtureUri('pi-digits-x8.csv');
-    await vscode.workspace.fs.writeFile(big, new TextEncoder().encode(`digit\n${Array.from({ length: 8 }, () => digits.join('\n')).join('\n')}\n`));
+    const big = await writePiDigits('pi-digits-x8.csv', 8);
     await setSetting('firstPass.aboveBytes', 0);
     await setSetting('firstPass.records', 1000);
     const doc = await vscode.workspace.openTextDocument(big);

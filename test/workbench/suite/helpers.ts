@@ -114,6 +114,20 @@ export async function copyFixture(name: string, to: string): Promise<vscode.Uri>
   return target;
 }
 
+/**
+ * Writes `name` into the workspace: the 5000 NIST StRD PiDigits values (../fixtures/pi-digits.csv)
+ * repeated `copies` times under the header `digit`, so 5000 × copies records. Large copies make jobs
+ * that last long enough to be interrupted.
+ */
+export async function writePiDigits(name: string, copies: number): Promise<vscode.Uri> {
+  const digits = new TextDecoder().decode(await vscode.workspace.fs.readFile(fixtureUri('pi-digits.csv'))).split('\n').slice(1).filter((l) => l !== '');
+  if (digits.length !== 5000) throw new Error(`pi-digits.csv: expected the 5000 PiDigits values (NIST StRD), got ${digits.length}`);
+  const target = fixtureUri(name);
+  const block = digits.join('\n');
+  await vscode.workspace.fs.writeFile(target, new TextEncoder().encode(`digit\n${Array.from({ length: copies }, () => block).join('\n')}\n`));
+  return target;
+}
+
 /** [line, character, line, character] of a range (0-based), for readable comparisons. */
 export function rangeOf(r: vscode.Range): number[] {
   return [r.start.line, r.start.character, r.end.line, r.end.character];
