@@ -1,5 +1,6 @@
 import type { BinChoice, BinRuleId } from '../options';
 import { auto } from './auto';
+import type { Moments } from '../stats/moments';
 import { type BinRule, binStats, type BinStats } from './bin-stats';
 import { doane } from './doane';
 import { freedmanDiaconis } from './freedman-diaconis';
@@ -111,15 +112,16 @@ function linspace(min: number, max: number, k: number): number[] {
  * says so (numpy would make one bin); more than `maxBins` intervals → capped (`exact`: maxBins equal
  * intervals; `nice`: the next nice width that fits), and the label says so.
  *
- * Cost: O(n) for the statistics plus O(k) for the edges; the input is not modified.
+ * Cost: O(n) for the statistics plus O(k) for the edges; the input is not modified. `moments`, when
+ * given, is `Moments.of(sorted)` (see `binStats`).
  *
  * @example binEdges(Float64Array.of(1, 2, 2, 3, 3, 3, 4, 4, 5, 9), { rule: 'sturges' }, 'nice')
  * // { rule: 'sturges', label: 'Sturges, 5 intervals of width 2', width: 2,
  * //   edges: [0, 2, 4, 6, 8, 10], edgeMode: 'nice' }
  */
-export function binEdges(sorted: Float64Array, choice: BinChoice, mode: 'nice' | 'exact', maxBins = 250): BinEdges | null {
+export function binEdges(sorted: Float64Array, choice: BinChoice, mode: 'nice' | 'exact', maxBins = 250, moments?: Moments): BinEdges | null {
   if (!Number.isInteger(maxBins) || maxBins < 1) throw new RangeError(`binEdges: maxBins must be a whole number of at least 1, got ${maxBins}`);
-  const stats = binStats(sorted);
+  const stats = binStats(sorted, moments);
   if (stats === null) return null;
   const { min, max } = stats;
 

@@ -1,3 +1,5 @@
+import { lowerBound, upperBound } from '../stats/lower-bound';
+
 /**
  * Counts of values per interval: [edges[i], edges[i+1]) for every interval, except that the last is
  * [edges[k−1], edges[k]] when `closedLast` (numpy's convention, used in `exact` mode).
@@ -32,3 +34,25 @@ export function histogramCounts(values: ArrayLike<number>, edges: readonly numbe
   }
   return counts;
 }
+
+/**
+ * `histogramCounts` for values sorted ascending (no NaN), in O(k log n): each interval's count is
+ * the difference of two binary searches (the first value at or above its lower edge, and at or
+ * above its upper edge, or above it for a closed last interval). Same result as `histogramCounts`
+ * for increasing edges; a column of millions of values is counted without reading each one.
+ *
+ * @example histogramCountsSorted(Float64Array.of(0, 1, 2, 2.5, 5), [0, 2.5, 5], true) // [3, 2]
+ */
+export function histogramCountsSorted(sorted: Float64Array, edges: readonly number[], closedLast: boolean): number[] {
+  const k = edges.length - 1;
+  if (k < 1) throw new RangeError(`histogramCountsSorted: needs at least two edges, got ${edges.length}`);
+  const counts = new Array<number>(k);
+  let from = lowerBound(sorted, edges[0]!, 0);
+  for (let i = 0; i < k; i++) {
+    const to = i === k - 1 && closedLast ? upperBound(sorted, edges[k]!, from) : lowerBound(sorted, edges[i + 1]!, from);
+    counts[i] = Math.max(0, to - from);
+    from = Math.max(from, to);
+  }
+  return counts;
+}
+

@@ -11,6 +11,7 @@ import { fieldTextAt } from './field-text';
 import type { JobState, ScanTotals } from './job';
 import { compareGroups } from './group-comparison';
 import { binValues } from './numeric-summary';
+import { lowerBound } from '../stats/lower-bound';
 import type { ColumnProfile, Flag, FlagTotal, GroupComparison, LineEnding, Profile } from './types';
 
 /** Bytes read back for a record whose end is not known (the last one): enough for any sane record. */
@@ -223,18 +224,6 @@ function sameBytes(a: Uint8Array, b: Uint8Array, st: JobState): boolean {
     if (!sa || !sb) return !sa && !sb;
     if (fieldTextAt(a, sa.startOffset, sa.endOffset, q) !== fieldTextAt(b, sb.startOffset, sb.endOffset, q)) return false;
   }
-}
-
-/** First index whose value is not below `v` (sorted ascending). */
-function lowerBound(sorted: Float64Array, v: number): number {
-  let lo = 0;
-  let hi = sorted.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if (sorted[mid]! < v) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
 }
 
 function lineEndingOf(s: ScanTotals): LineEnding {

@@ -28,6 +28,10 @@ export interface FlagInput {
   column: ColumnProfile;
   ctx: ColumnContext;
   rowValues: Float64Array | null;
+  /** The non-NaN row values, sorted ascending (rules count their hits from them). */
+  sorted: Float64Array | null;
+  /** Category code per row (-1: none) while the dictionary is uncapped, else null. */
+  codes: Int32Array | null;
   /** 0-based rows of cells that do not fit the column's type / impossible dates. */
   invalidRows: number[];
   impossibleRows: number[];

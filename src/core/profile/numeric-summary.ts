@@ -3,7 +3,7 @@
 // should use depends on the level; the panel and the reports show only those.
 import { binEdges } from '../bins/bin-edges';
 import { groupedTable } from '../bins/grouped-table';
-import { histogramCounts } from '../bins/histogram-counts';
+import { histogramCountsSorted } from '../bins/histogram-counts';
 import type { BinChoice, ProfileOptions } from '../options';
 import { dagostinoPearson } from '../stats/dagostino-pearson';
 import { geometricMean } from '../stats/geometric-mean';
@@ -26,12 +26,15 @@ export interface NumericSummary {
   shape: ShapeCheck | null;
 }
 
-/** Histogram and grouped table of sorted values for a bin choice (also used to re-bin on request). */
-export function binValues(sorted: Float64Array, choice: BinChoice, mode: 'nice' | 'exact'): { histogram: Histogram | null; grouped: GroupedTable | null } {
-  const edges = binEdges(sorted, choice, mode);
+/**
+ * Histogram and grouped table of sorted values for a bin choice (also used to re-bin on request);
+ * `moments`, when given, is `Moments.of(sorted)`.
+ */
+export function binValues(sorted: Float64Array, choice: BinChoice, mode: 'nice' | 'exact', moments?: Moments): { histogram: Histogram | null; grouped: GroupedTable | null } {
+  const edges = binEdges(sorted, choice, mode, undefined, moments);
   if (!edges) return { histogram: null, grouped: null };
   const closedLast = edges.edgeMode === 'exact';
-  const counts = histogramCounts(sorted, edges.edges, closedLast);
+  const counts = histogramCountsSorted(sorted, edges.edges, closedLast);
   // Guard for the profile's JSON contract: finite edges, and every value in one plain count.
   let total = 0;
   for (const c of counts) total += c;
@@ -86,7 +89,7 @@ export function numericSummary(sorted: Float64Array, _rowValues: Float64Array, l
     quantileType: type,
   };
   if (ALWAYS_NUMBERS.some((k) => !Number.isFinite(stats[k]))) return { stats: null, histogram: null, grouped: null, shape: null };
-  const { histogram, grouped } = binValues(sorted, options.bins, options.edges);
+  const { histogram, grouped } = binValues(sorted, options.bins, options.edges, m);
   let shape: ShapeCheck | null = null;
   if (level === 'interval' || level === 'ratio') {
     const tests: ShapeTest[] = [];
@@ -97,7 +100,7 @@ export function numericSummary(sorted: Float64Array, _rowValues: Float64Array, l
       else if (sw) skipped.push('Shapiro-Wilk could not be computed: the values are too extreme for double-precision arithmetic');
     } else skipped.push(n < 3 ? 'Shapiro-Wilk needs at least 3 values' : n > 5000 ? 'Shapiro-Wilk (Royston) is defined for up to 5000 values' : 'all values are equal');
     if (n >= 20 && max > min) {
-      const dp = dagostinoPearson(sorted);
+      const dp = dagostinoPearson(sorted, m);
       if (dp && Number.isFinite(dp.k2) && Number.isFinite(dp.p)) tests.push({ method: 'dagostino-pearson', statistic: dp.k2, p: dp.p, n });
       else if (dp) skipped.push("D'Agostino-Pearson could not be computed: the values are too extreme for double-precision arithmetic");
     } else skipped.push(n < 20 ? "D'Agostino-Pearson needs at least 20 values" : 'all values are equal');

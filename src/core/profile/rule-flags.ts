@@ -1,9 +1,11 @@
 // Runs the enabled rules of src/core/rules on one column and turns their hits into pending flags.
-// Numeric rules read the row-indexed values; text rules read the cells as written, rebuilt from
-// the column's dictionary (no cell text was kept per row), so they need the dictionary uncapped.
+// Numeric rules read the row-indexed values; text rules read the cells as written, as the column's
+// category codes with the dictionary's texts (no cell text was kept per row, and none is made), so
+// they need the dictionary uncapped.
 import { KIND_MASK, KIND_MISSING } from '../infer/classify-cell';
 import type { RuleId } from '../options';
 import { categoryVariant } from '../rules/category-variant';
+import { recode, type CodedCells } from '../rules/coded-cells';
 import { duplicateKey } from '../rules/duplicate-key';
 import { generalizedEsd } from '../rules/generalized-esd';
 import { grubbs } from '../rules/grubbs';
@@ -26,7 +28,8 @@ export interface RuleOutcome {
 }
 
 export function ruleFlags(input: FlagInput, outcome: RuleOutcome): void {
-  const { column, ctx, rowValues, acc } = input;
+  const { column, ctx, rowValues } = input;
+  const sorted = input.sorted ?? undefined;
   const r = ctx.options.rules;
   const on = (id: RuleId) => r.enabled.has(id);
   const maxFlags = r.maxFlagsPerRule;
@@ -54,12 +57,12 @@ export function ruleFlags(input: FlagInput, outcome: RuleOutcome): void {
   // rating has no meaningful "far".
   if (numeric && rowValues && column.stats && 'mean' in column.stats && (column.level === 'interval' || column.level === 'ratio')) {
     const s: NumericStats = column.stats;
-    if (on('tukey-fence')) take(tukeyFence(rowValues, s, { k: r.tukeyK, farK: r.tukeyFarK, maxFlags }), false);
-    if (on('modified-z')) take(modifiedZ(rowValues, s, { threshold: r.modifiedZThreshold, maxFlags }), false);
-    if (on('z-score')) take(zScore(rowValues, s, { threshold: r.zThreshold, maxFlags }), false);
+    if (on('tukey-fence')) take(tukeyFence(rowValues, s, { k: r.tukeyK, farK: r.tukeyFarK, maxFlags, sorted }), false);
+    if (on('modified-z')) take(modifiedZ(rowValues, s, { threshold: r.modifiedZThreshold, maxFlags, sorted }), false);
+    if (on('z-score')) take(zScore(rowValues, s, { threshold: r.zThreshold, maxFlags, sorted }), false);
     if (on('grubbs')) take(grubbs(rowValues, { alpha: r.grubbsAlpha, maxFlags }), false);
     if (on('generalized-esd')) take(generalizedEsd(rowValues, { maxOutliers: r.esdMaxOutliers, alpha: r.esdAlpha, maxFlags }), false);
-    if (on('out-of-domain') && column.level === 'ratio') {
+    if (on('out-of-domain') && column.level === 'ratio' && s.min < 0) {
       // A ratio level was set (declared or by option) although negatives exist: a measure with a true zero cannot be negative.
       for (let i = 0; i < rowValues.length; i++) {
         if (rowValues[i]! < 0) {
@@ -72,12 +75,13 @@ export function ruleFlags(input: FlagInput, outcome: RuleOutcome): void {
 
   const textRules: RuleId[] = ['surrounding-whitespace', 'category-variant', 'mixed-missing-tokens', 'near-constant', 'duplicate-key'];
   if (!textRules.some(on)) return;
-  if (!acc.codes) {
+  if (!input.codes) {
     for (const rule of textRules.filter(on)) outcome.skipped.push({ rule, reason: 'the column has more distinct values than are kept exactly' });
     return;
   }
   const cells = cellsAsWritten(input);
   const tokens = new Set(ctx.missingTokens);
+  // Called once per distinct text.
   const isMissing = (cell: string) => tokens.has(cell.trim());
   if (on('surrounding-whitespace')) take(surroundingWhitespace(cells, { isMissing, maxFlags }), true);
   if (on('category-variant') && !numeric && column.type !== 'date' && column.type !== 'datetime') take(categoryVariant(cells, { isMissing, maxFlags }), true);
@@ -86,21 +90,26 @@ export function ruleFlags(input: FlagInput, outcome: RuleOutcome): void {
   if (on('duplicate-key')) take(duplicateKey(cells, { name: column.name, declared: ctx.primaryKey, isMissing, maxFlags }), true);
 }
 
-/** Every cell of the column as written: the dictionary entry, the missing token, or '' for an absent field. */
-function cellsAsWritten(input: FlagInput): string[] {
+/**
+ * Every cell of the column as written, coded: the dictionary entry, the missing token, or '' for
+ * an absent field. Missing and absent cells get codes past the dictionary's; `recode` merges any
+ * that spell the same text and numbers the texts in order of first appearance.
+ */
+function cellsAsWritten(input: FlagInput): CodedCells {
   const { acc, ctx } = input;
   const labels = [...acc.categories.keys()];
-  const codes = acc.codes!.view();
+  const base = labels.length;
+  // One slot per missing-token kind, then one for an absent field.
+  const tokenSlots = KIND_MASK + 1 - KIND_MISSING;
+  for (let t = 0; t < tokenSlots; t++) labels.push(ctx.missingTokens[t] ?? '');
+  labels.push('');
+  const absent = base + tokenSlots;
+  const codes = input.codes!;
   const kinds = acc.kinds.view();
-  const cells = new Array<string>(codes.length);
-  for (let i = 0; i < codes.length; i++) {
+  return recode(codes.length, (i) => {
     const c = codes[i]!;
-    if (c >= 0) {
-      cells[i] = labels[c]!;
-      continue;
-    }
+    if (c >= 0) return c;
     const kind = kinds[i]! & KIND_MASK;
-    cells[i] = kind >= KIND_MISSING ? ctx.missingTokens[kind - KIND_MISSING] ?? '' : '';
-  }
-  return cells;
+    return kind >= KIND_MISSING ? base + kind - KIND_MISSING : absent;
+  }, labels);
 }

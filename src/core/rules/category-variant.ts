@@ -1,7 +1,7 @@
 // Spelling variants of one category: values equal once case, surrounding white space, inner spacing
 // and Unicode normalisation (NFC) are set aside ("Dark Roast", "dark roast", "Dark  Roast ",
 // "DarkRoast"). Common practice in cleaning categorical data; the majority spelling is offered as the fix.
-import { hitList } from './hit-list';
+import { asCoded, hitsByText, type CodedCells, type TextVerdict } from './coded-cells';
 import { severityOf } from './severity';
 import { BLANK_IS_MISSING, REVIEW, type CapOptions, type IsMissing, type RuleResult } from './types';
 
@@ -15,7 +15,7 @@ export function variantKey(cell: string): string {
 }
 
 /** How a spelling differs from the majority one, in words (both share a variant key). */
-function differences(a: string, b: string): string {
+export function differences(a: string, b: string): string {
   const out: string[] = [];
   const lead = (s: string): string => s.slice(0, s.length - s.trimStart().length);
   const trail = (s: string): string => s.slice(s.trimEnd().length);
@@ -32,20 +32,23 @@ function differences(a: string, b: string): string {
 /**
  * Groups the non-missing cells by `variantKey`; in each group with two or more spellings, flags every
  * cell not written in the group's most common spelling (ties: the one seen first). Cost: O(total
- * length), memory for the distinct spellings.
+ * length of the distinct texts), plus a row scan up to the last hit kept.
  * Example: ['Arabica', 'arabica', 'Arabica', 'Robusta'] flags row 2, fix "Arabica".
  */
-export function categoryVariant(cells: readonly string[], options: VariantOptions = {}): RuleResult {
+export function categoryVariant(cells: readonly string[] | CodedCells, options: VariantOptions = {}): RuleResult {
   const isMissing = options.isMissing ?? BLANK_IS_MISSING;
-  // key -> spelling -> count, in first-seen order (Map keeps insertion order).
+  const coded = asCoded(cells);
+  const { texts, counts } = coded;
+  // key -> spelling -> count, in first-seen order (texts are in first-seen order; Map keeps it).
   const groups = new Map<string, Map<string, number>>();
-  for (const cell of cells) {
-    if (isMissing(cell)) continue;
+  const keys: (string | null)[] = texts.map((cell, t) => {
+    if (isMissing(cell)) return null;
     const key = variantKey(cell);
     let g = groups.get(key);
     if (!g) groups.set(key, (g = new Map()));
-    g.set(cell, (g.get(cell) ?? 0) + 1);
-  }
+    g.set(cell, counts[t]!);
+    return key;
+  });
   const majority = new Map<string, { spelling: string; count: number; spellings: number }>();
   for (const [key, g] of groups) {
     if (g.size < 2) continue;
@@ -54,16 +57,13 @@ export function categoryVariant(cells: readonly string[], options: VariantOption
     for (const [s, c] of g) if (c > bestCount) { best = s; bestCount = c; }
     majority.set(key, { spelling: best, count: bestCount, spellings: g.size });
   }
-  const list = hitList('category-variant', options.maxFlags);
-  if (majority.size === 0) return list.result();
-  cells.forEach((cell, i) => {
-    if (isMissing(cell)) return;
-    const key = variantKey(cell);
-    const m = majority.get(key);
-    if (!m || m.spelling === cell) return;
-    const own = groups.get(key)?.get(cell) ?? 0;
+  const verdicts = texts.map((cell, t): TextVerdict => {
+    const key = keys[t];
+    const m = key === null || key === undefined ? undefined : majority.get(key);
+    if (!m || m.spelling === cell) return null;
+    const own = counts[t]!;
     const message = `${JSON.stringify(cell)} differs from ${JSON.stringify(m.spelling)} only by ${differences(cell, m.spelling)}; ${JSON.stringify(m.spelling)} is the usual spelling (${m.count} cell${m.count === 1 ? '' : 's'}; this one ${own}; ${m.spellings} spellings in all)${REVIEW}`;
-    list.push({ index: i, value: cell, severity: severityOf('category-variant'), message, fix: m.spelling });
+    return { value: cell, severity: severityOf('category-variant'), message, fix: m.spelling };
   });
-  return list.result();
+  return hitsByText('category-variant', coded, verdicts, options.maxFlags);
 }

@@ -2,10 +2,11 @@
 // or one named like an identifier (id, key, code, ...) whose values are nearly all distinct
 // (default at least 95%). A repeat in such a column usually means a duplicated record or a typing
 // slip (common practice; cf. primary keys in "Model for Tabular Data" §4.5).
-import { hitList, skippedResult } from './hit-list';
+import { asCoded, type CodedCells } from './coded-cells';
+import { DEFAULT_MAX_FLAGS, skippedResult } from './hit-list';
 import { messageNumber } from './message-number';
 import { severityOf } from './severity';
-import { BLANK_IS_MISSING, REVIEW, type CapOptions, type IsMissing, type RuleResult } from './types';
+import { BLANK_IS_MISSING, REVIEW, type CapOptions, type IsMissing, type RuleHit, type RuleResult } from './types';
 
 const KEY_WORDS = new Set(['id', 'key', 'code', 'uuid', 'guid', 'identifier', 'sku']);
 
@@ -35,35 +36,47 @@ export interface DuplicateKeyOptions extends CapOptions {
 
 /**
  * Flags each repeat of a value in a key-like column, naming the first row that had it. Missing
- * cells are skipped. Cost: one pass, memory for the distinct values.
+ * cells are skipped. Cost: O(distinct texts), plus a row scan up to the last hit kept.
  * Example: a column "id" of 1..100 with "7" again at row 101 flags row 101, "repeats row 7".
  */
-export function duplicateKey(cells: readonly string[], options: DuplicateKeyOptions): RuleResult {
+export function duplicateKey(cells: readonly string[] | CodedCells, options: DuplicateKeyOptions): RuleResult {
   const isMissing = options.isMissing ?? BLANK_IS_MISSING;
   const minShare = options.minDistinctShare ?? 0.95;
-  const first = new Map<string, number>();
+  const { codes, texts, counts } = asCoded(cells);
+  const missing = texts.map((cell) => isMissing(cell));
   let n = 0;
-  for (let i = 0; i < cells.length; i++) {
-    const cell = cells[i] as string;
-    if (isMissing(cell)) continue;
-    n++;
-    if (!first.has(cell)) first.set(cell, i);
+  let distinct = 0;
+  for (let t = 0; t < texts.length; t++) {
+    if (missing[t]) continue;
+    n += counts[t]!;
+    distinct++;
   }
   if (n === 0) return skippedResult('duplicate-key', 'no values');
-  const share = first.size / n;
+  const share = distinct / n;
   let why: string;
   if (options.declared) why = 'the metadata declares it the primary key';
   else if (!looksLikeKeyName(options.name)) return skippedResult('duplicate-key', 'the column is not named like a key and is not declared one');
   else if (share < minShare) return skippedResult('duplicate-key', `only ${messageNumber(100 * share)}% of values are distinct, below ${messageNumber(100 * minShare)}%`);
   else why = `it is named like a key and ${messageNumber(100 * share)}% of its values are distinct`;
-  const list = hitList('duplicate-key', options.maxFlags);
-  for (let i = 0; i < cells.length; i++) {
-    const cell = cells[i] as string;
-    if (isMissing(cell)) continue;
-    const at = first.get(cell) as number;
-    if (at === i) continue;
-    const message = `${JSON.stringify(cell)} repeats the value of row ${at + 1} in "${options.name}", which looks like a key (${why})${REVIEW}`;
-    list.push({ index: i, value: cell, severity: severityOf('duplicate-key'), message });
+  // Every cell of a value but its first is a repeat.
+  const total = n - distinct;
+  const maxFlags = options.maxFlags ?? DEFAULT_MAX_FLAGS;
+  const hits: RuleHit[] = [];
+  if (total > 0 && maxFlags > 0) {
+    const first = new Int32Array(texts.length).fill(-1);
+    for (let i = 0; i < codes.length; i++) {
+      const t = codes[i]!;
+      if (missing[t]) continue;
+      const at = first[t]!;
+      if (at < 0) {
+        first[t] = i;
+        continue;
+      }
+      const cell = texts[t]!;
+      const message = `${JSON.stringify(cell)} repeats the value of row ${at + 1} in "${options.name}", which looks like a key (${why})${REVIEW}`;
+      hits.push({ index: i, value: cell, severity: severityOf('duplicate-key'), message });
+      if (hits.length >= maxFlags) break;
+    }
   }
-  return list.result();
+  return { rule: 'duplicate-key', hits, total, skipped: null };
 }

@@ -7,6 +7,10 @@ export const DEFAULT_MAX_FLAGS = 1000;
 
 export interface HitList {
   push(hit: RuleHit): void;
+  /** True once `maxFlags` hits are kept: a rule then calls `count` and builds no message. */
+  readonly full: boolean;
+  /** Counts a hit that would not be kept (the list is full). */
+  count(): void;
   /** The result; hits sorted by row. */
   result(skipped?: string | null): RuleResult;
 }
@@ -14,6 +18,7 @@ export interface HitList {
 /**
  * Example: const list = hitList('z-score', 1); list.push(a); list.push(b); list.result() gives
  * { hits: [a], total: 2, skipped: null }. Hits must be pushed in row order for the cap to keep the first rows.
+ * Once `list.full`, a rule may call `list.count()` instead of building a hit no one will keep.
  */
 export function hitList(rule: RuleId, maxFlags: number = DEFAULT_MAX_FLAGS): HitList {
   const hits: RuleHit[] = [];
@@ -22,6 +27,12 @@ export function hitList(rule: RuleId, maxFlags: number = DEFAULT_MAX_FLAGS): Hit
     push(hit) {
       total++;
       if (hits.length < maxFlags) hits.push(hit);
+    },
+    get full() {
+      return hits.length >= maxFlags;
+    },
+    count() {
+      total++;
     },
     result(skipped = null) {
       return { rule, hits: hits.sort((a, b) => a.index - b.index), total, skipped };

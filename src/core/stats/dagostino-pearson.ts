@@ -21,7 +21,8 @@ export const DAGOSTINO_MIN_N = 20;
  *   (1 + x √(2/(A−4))))) / √(2/(9A));
  * - p = P(χ²₂ > K²). NaN values are skipped. A p-value is not proof of normality.
  *
- * Cost: O(n) (one pass through `Moments`); the input is not modified.
+ * Cost: O(n) (one pass through `Moments`; none when the caller passes `Moments.of(values)` as
+ * `moments`); the input is not modified.
  *
  * Returns null when fewer than `DAGOSTINO_MIN_N` (20) values remain or all values are equal.
  *
@@ -30,8 +31,8 @@ export const DAGOSTINO_MIN_N = 20;
  * dagostinoPearson([4, 1, 0, 1, 4, 9, 4, 1, 0, 1, 4, 9, 4, 1, 0, 1, 4, 9, 4, 1, 0, 1, 4, 9])
  * // ≈ { k2: 3.92371918, p: 0.14059673 }
  */
-export function dagostinoPearson(values: ArrayLike<number>): { k2: number; p: number } | null {
-  const m = Moments.of(values);
+export function dagostinoPearson(values: ArrayLike<number>, moments?: Moments): { k2: number; p: number } | null {
+  const m = moments ?? Moments.of(values);
   const n = m.n;
   if (n < DAGOSTINO_MIN_N || !(m.m2 > 0)) return null;
   const m2 = m.m2 / n;

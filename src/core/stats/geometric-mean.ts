@@ -17,11 +17,17 @@ export function geometricMean(values: ArrayLike<number>): number | null {
   let n = 0;
   let sum = 0;
   let compensation = 0;
+  let last = NaN;
+  let l = NaN;
   for (let i = 0; i < values.length; i++) {
     const x = values[i] as number;
     if (Number.isNaN(x)) continue;
     if (!(x > 0)) return null;
-    const l = Math.log(x);
+    // A repeat of the previous value (runs, in sorted input) reuses its logarithm: the same bits.
+    if (x !== last) {
+      last = x;
+      l = Math.log(x);
+    }
     const t = sum + l;
     compensation += Math.abs(sum) >= Math.abs(l) ? sum - t + l : l - t + sum;
     sum = t;

@@ -1,3 +1,4 @@
+import { lowerBound } from './lower-bound';
 import { sortedLength } from './quantile';
 
 /**
@@ -9,13 +10,15 @@ import { sortedLength } from './quantile';
  * simple-statistics `medianAbsoluteDeviation` and R's `mad(x, constant = 1)`.
  *
  * Method: because `sorted` is in order, the deviations below the median (read leftwards) and above
- * it (read rightwards) are two ascending runs; their median is found by merging the runs with two
- * pointers up to the middle, so nothing is sorted or allocated.
+ * it (read rightwards) are two ascending runs; the middle one (or two) of their union is found by
+ * the binary search for the k-th smallest of two sorted arrays (Frederickson & Johnson 1982, "The
+ * complexity of selection and ranking in X + Y and matrices with sorted columns", J. Comput. Syst.
+ * Sci. 24(2), the two-array case), so nothing is sorted, merged or allocated.
  *
  * `sorted` must be in ascending order; trailing NaN (where `Float64Array.prototype.sort` puts them)
  * are skipped.
  *
- * Cost: O(n) time, O(1) memory; the input is not modified.
+ * Cost: O(log n) time, O(1) memory; the input is not modified.
  *
  * Returns null when there are no values.
  *
@@ -27,27 +30,28 @@ export function medianAbsoluteDeviation(sorted: Float64Array): number | null {
   const mid = n >> 1;
   const median = n % 2 === 1 ? (sorted[mid] as number) : 0.5 * (sorted[mid - 1] as number) + 0.5 * (sorted[mid] as number);
   // First index at or above the median: left run is [0, split) read from split − 1 down.
-  let split = mid;
-  while (split > 0 && (sorted[split - 1] as number) >= median) split--;
-  while (split < n && (sorted[split] as number) < median) split++;
-  let left = split - 1;
-  let right = split;
-  const next = (): number => {
-    const dl = left >= 0 ? median - (sorted[left] as number) : Infinity;
-    const dr = right < n ? (sorted[right] as number) - median : Infinity;
-    if (dl <= dr) {
-      left--;
-      return dl;
-    }
-    right++;
-    return dr;
-  };
-  // The (mid)-th smallest deviation (0-based), and for even n the one before it.
-  let previous = 0;
-  let current = 0;
-  for (let k = 0; k <= mid; k++) {
-    previous = current;
-    current = next();
+  const split = lowerBound(sorted.subarray(0, n), median);
+  // Deviations below the median, nearest first, and above it: both ascending.
+  const below = (j: number): number => median - (sorted[split - 1 - j] as number);
+  const above = (j: number): number => (sorted[split + j] as number) - median;
+  const current = kthOfTwo(mid, below, split, above, n - split);
+  return n % 2 === 1 ? current : 0.5 * kthOfTwo(mid - 1, below, split, above, n - split) + 0.5 * current;
+}
+
+/**
+ * The k-th smallest (0-based) of the union of two ascending sequences a(0..na−1) and b(0..nb−1),
+ * k < na + nb: the binary search for how many of the k + 1 smallest come from a.
+ */
+function kthOfTwo(k: number, a: (j: number) => number, na: number, b: (j: number) => number, nb: number): number {
+  let lo = Math.max(0, k + 1 - nb);
+  let hi = Math.min(k + 1, na);
+  for (;;) {
+    // Take i from a and k + 1 − i from b; the split is right when neither side's last taken
+    // exceeds the other side's first left.
+    const i = (lo + hi) >>> 1;
+    const j = k + 1 - i;
+    if (i < na && j > 0 && b(j - 1) > a(i)) lo = i + 1;
+    else if (i > 0 && j < nb && a(i - 1) > b(j)) hi = i - 1;
+    else return i === 0 ? b(j - 1) : j === 0 ? a(i - 1) : Math.max(a(i - 1), b(j - 1));
   }
-  return n % 2 === 1 ? current : 0.5 * previous + 0.5 * current;
 }

@@ -72,10 +72,44 @@ export class Moments implements MomentsState {
   sum = 0;
   compensation = 0;
 
-  /** Accumulates every non-NaN value of `values` (the input is not modified). */
+  /**
+   * Accumulates every non-NaN value of `values` (the input is not modified): `push` for each, with
+   * the same operations in the same order (so the same bits), kept in locals for a column of
+   * millions of values.
+   */
   static of(values: ArrayLike<number>): Moments {
+    let n = 0;
+    let mean = 0;
+    let m2 = 0;
+    let m3 = 0;
+    let m4 = 0;
+    let min = NaN;
+    let max = NaN;
+    let sum = 0;
+    let compensation = 0;
+    for (let i = 0; i < values.length; i++) {
+      const x = values[i] as number;
+      if (Number.isNaN(x)) continue;
+      const n1 = n;
+      n = n1 + 1;
+      const delta = x - mean;
+      const deltaN = delta / n;
+      const deltaN2 = deltaN * deltaN;
+      const term1 = delta * deltaN * n1;
+      m4 += term1 * deltaN2 * (n * n - 3 * n + 3) + 6 * deltaN2 * m2 - 4 * deltaN * m3;
+      m3 += term1 * deltaN * (n - 2) - 3 * deltaN * m2;
+      m2 += term1;
+      if (n === 1 || x < min) min = x;
+      if (n === 1 || x > max) max = x;
+      const t = sum + x;
+      compensation += Math.abs(sum) >= Math.abs(x) ? sum - t + x : x - t + sum;
+      sum = t;
+      const total = (sum + compensation) / n;
+      mean = Number.isFinite(total) ? total : mean + deltaN;
+    }
     const m = new Moments();
-    for (let i = 0; i < values.length; i++) m.push(values[i] as number);
+    if (n === 0) return m;
+    Object.assign(m, { n, mean, m2, m3, m4, min, max, sum, compensation });
     return m;
   }
 

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { binEdges } from '../../../../src/core/bins/bin-edges';
-import { histogramCounts } from '../../../../src/core/bins/histogram-counts';
+import { histogramCounts, histogramCountsSorted } from '../../../../src/core/bins/histogram-counts';
 import { numpyBins, sortedOf, strd, valuesOf } from './fixtures';
 
 /** The definition, by brute force: the interval i with edges[i] ≤ x < edges[i+1] (last closed if asked). */
@@ -65,5 +65,26 @@ describe('histogramCounts', () => {
     expect(histogramCounts(values, edges, false)).toEqual([1, 0]);
     expect(histogramCounts(values, edges, true)).toEqual([1, 1]);
     expect(() => histogramCounts([1], [0], false)).toThrow('histogramCounts: needs at least two edges, got 1');
+  });
+});
+
+describe('histogramCountsSorted', () => {
+  it('runs its doc example', () => {
+    expect(histogramCountsSorted(Float64Array.of(0, 1, 2, 2.5, 5), [0, 2.5, 5], true)).toEqual([3, 2]);
+    expect(() => histogramCountsSorted(Float64Array.of(1), [0], false)).toThrow('histogramCountsSorted: needs at least two edges, got 1');
+  });
+
+  it('equals the definition on sorted values, with values on edges, repeated edges and values outside (fast-check)', () => {
+    const small = fc.integer({ min: -20, max: 20 }).map((i) => i / 4);
+    fc.assert(fc.property(
+      fc.array(fc.oneof(small, fc.double({ min: -6, max: 6, noNaN: true })), { maxLength: 200 }),
+      fc.array(small, { minLength: 2, maxLength: 12 }),
+      fc.boolean(),
+      (values, rawEdges, closedLast) => {
+        const edges = [...rawEdges].sort((a, b) => a - b);
+        const sorted = Float64Array.from(values).sort();
+        expect(histogramCountsSorted(sorted, edges, closedLast)).toEqual(bruteForce(Array.from(sorted), edges, closedLast));
+      },
+    ), { numRuns: 500 });
   });
 });

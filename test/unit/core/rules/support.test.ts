@@ -17,6 +17,16 @@ describe('hitList', () => {
     list.push(hit(1));
     expect(list.result()).toEqual({ rule: 'z-score', hits: [a], total: 2, skipped: null });
   });
+
+  it('says when it is full, and counts hits it would not keep', () => {
+    const list = hitList('z-score', 1);
+    expect(list.full).toBe(false);
+    list.push(hit(0));
+    expect(list.full).toBe(true);
+    list.count();
+    list.count();
+    expect(list.result()).toEqual({ rule: 'z-score', hits: [hit(0)], total: 3, skipped: null });
+  });
 });
 
 describe('messageNumber', () => {

@@ -144,4 +144,16 @@ describe('Moments', () => {
     expect(m.cv).toBeCloseTo(2.138089935299395 / 5, 15);
     expect(m.populationSd).toBeCloseTo(2, 15);
   });
+  it('Moments.of gives the very state of pushing the values one by one (fast-check)', () => {
+    const value = fc.oneof(
+      fc.double({ noNaN: false }),
+      fc.constantFrom(NaN, -0, 0, 1e308, -1e308, 5e-324, Infinity, -Infinity),
+      fc.integer({ min: -1000, max: 1000 }),
+    );
+    fc.assert(fc.property(fc.array(value, { maxLength: 60 }), (values) => {
+      const pushed = new Moments();
+      for (const x of values) pushed.push(x);
+      expect(Moments.of(Float64Array.from(values)).toJSON()).toEqual(pushed.toJSON());
+    }), { numRuns: 1000 });
+  });
 });

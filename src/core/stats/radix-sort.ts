@@ -1,0 +1,90 @@
+// Sorting many doubles in linear time, for the exact quantiles and histograms of a column of
+// millions of values: a comparison sort costs n log n comparisons, a radix sort a fixed number of
+// passes over the data.
+
+/**
+ * Below this many values the built-in sort is as fast: the radix sort's fixed cost is its four
+ * tables of 65 536 counts.
+ */
+export const RADIX_FROM = 1 << 16;
+
+const RADIX = 1 << 16;
+const MASK = RADIX - 1;
+const PASSES = 4;
+
+const littleEndian = new Uint8Array(Float64Array.of(1).buffer)[7] === 0x3f;
+
+/**
+ * Sorts doubles ascending in place and returns them, in the order `Float64Array.prototype.sort`
+ * gives (−Infinity first, −0 before +0, +Infinity last). The values must not hold NaN.
+ *
+ * Method: least-significant-digit radix sort (Knuth, The Art of Computer Programming vol. 3,
+ * §5.2.5, "radix sorting") on the 64 bits of each IEEE 754 double read as an unsigned integer key
+ * made to order as Herf describes ("Radix Tricks", 2001): a positive number's sign bit is set, a
+ * negative number's bits are all inverted, so that negatives of larger magnitude come first. Four
+ * passes of 16-bit digits, each a stable counting scatter of the doubles themselves (the key is
+ * worked out from the bits as each value is read, so no value is ever stored with altered bits);
+ * a pass whose digit is the same for every value is skipped (the low bits of whole numbers, the
+ * high bits of a column of similar numbers). Shorter arrays than RADIX_FROM, and big-endian
+ * machines, use the built-in sort.
+ *
+ * Cost: O(n) time (one counting pass, at most four scatter passes); memory 8n bytes for the second
+ * buffer plus 1.25 MiB of counts.
+ *
+ * @example radixSortFloat64(Float64Array.of(3, -0, -Infinity, 0, -2.5, 1e-310)) // [-Infinity, -2.5, -0, 0, 1e-310, 3]
+ */
+export function radixSortFloat64(values: Float64Array, from: number = RADIX_FROM): Float64Array {
+  const n = values.length;
+  if (n < from || !littleEndian) return values.sort();
+  const counts = new Uint32Array(PASSES * RADIX);
+  let src: Float64Array = values;
+  let srcWords: Uint32Array = new Uint32Array(values.buffer, values.byteOffset, 2 * n);
+  for (let i = 0; i < n; i++) {
+    const hi = srcWords[2 * i + 1]!;
+    const m = hi >> 31;
+    const keyLo = (srcWords[2 * i]! ^ m) >>> 0;
+    const keyHi = (hi ^ (m | 0x80000000)) >>> 0;
+    counts[keyLo & MASK]!++;
+    counts[RADIX + (keyLo >>> 16)]!++;
+    counts[2 * RADIX + (keyHi & MASK)]!++;
+    counts[3 * RADIX + (keyHi >>> 16)]!++;
+  }
+  let dst: Float64Array = new Float64Array(n);
+  let dstWords: Uint32Array = new Uint32Array(dst.buffer);
+  const start = new Uint32Array(RADIX);
+  for (let pass = 0; pass < PASSES; pass++) {
+    const base = pass * RADIX;
+    // A digit every value shares: the scatter would leave the order as it is.
+    let trivial = false;
+    for (let d = 0; d < RADIX; d++) {
+      const c = counts[base + d]!;
+      if (c === 0) continue;
+      trivial = c === n;
+      break;
+    }
+    if (trivial) continue;
+    let at = 0;
+    for (let d = 0; d < RADIX; d++) {
+      start[d] = at;
+      at += counts[base + d]!;
+    }
+    const shift = (pass & 1) * 16;
+    if (pass < 2) {
+      for (let i = 0; i < n; i++) {
+        const m = srcWords[2 * i + 1]! >> 31;
+        const d = ((srcWords[2 * i]! ^ m) >>> shift) & MASK;
+        dst[start[d]!++] = src[i]!;
+      }
+    } else {
+      for (let i = 0; i < n; i++) {
+        const hi = srcWords[2 * i + 1]!;
+        const d = ((hi ^ ((hi >> 31) | 0x80000000)) >>> shift) & MASK;
+        dst[start[d]!++] = src[i]!;
+      }
+    }
+    [src, dst] = [dst, src];
+    [srcWords, dstWords] = [dstWords, srcWords];
+  }
+  if (src !== values) values.set(src);
+  return values;
+}
