@@ -82,6 +82,11 @@ export function categoricalSection(ctx: PanelContext, c: ColumnProfile, withChar
       root.append(bars.root);
     }
     const table = section('Frequency table', 'h3', button('Copy as Markdown', () => copy(ctx, 'frequencies', c.name), 'btn secondary'));
+    if (c.frequencyError !== null) {
+      // Past the distinct cap the counts are a summary's estimates; say how far off they can be.
+      const d = count(c.frequencyError);
+      table.body.append(note(`Estimated counts: the column has more distinct values than are counted exactly, so these come from a Misra–Gries summary. Each count may be up to ${d} below the true one, and a value not listed may occur up to ${d} times more than the last one listed.`));
+    }
     table.body.append(scroller(frequencyTable(t, c.name)));
     root.append(table.root);
   }

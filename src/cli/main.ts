@@ -12,6 +12,13 @@ import { defaultWorkers, profileFileInWorkers, runWorkerIfAsked } from './parall
 import { parseArgs, USAGE } from './parse-args';
 
 const CHUNK = 1 << 20; // 1 MiB reads: the default 64 KiB stream chunk is 2-3x slower to scan
+/** As the extension's assay.memoryLimitMB. */
+const DEFAULT_MEMORY_LIMIT_MB = 8192;
+
+/** MB from the command line -> the core's ceiling in bytes (0: none). */
+function memoryLimitBytes(mb: number): number | null {
+  return mb === 0 ? null : mb * 1024 * 1024;
+}
 
 async function main(argv: string[]): Promise<number> {
   let args;
@@ -54,6 +61,7 @@ async function main(argv: string[]): Promise<number> {
       groupBy: args.groupBy,
       missingTokens: args.missing,
       maxRecords: args.maxRecords,
+      memoryLimitBytes: memoryLimitBytes(args.memoryLimit ?? DEFAULT_MEMORY_LIMIT_MB),
     };
     if (args.bins !== undefined) input.bins = parseBinChoice(args.bins);
     input.rules = {
@@ -104,6 +112,9 @@ async function main(argv: string[]): Promise<number> {
     const refused = profile.notices.find((n) => n.code === 'not-delimited-text');
     if (refused) return fail(`${file}: ${refused.message}`);
     write(profile, args.format, file, args.significantDigits);
+    // Stopped at the memory ceiling: the profile printed covers part of the file, so a pipeline must not pass it.
+    const stopped = profile.notices.find((n) => n.code === 'memory-limit');
+    if (stopped) return fail(`${file}: ${stopped.message}`);
     if (args.failOn.length > 0) {
       const reasons = failOnReasons(profile, args.failOn as FailOn[]);
       if (reasons.length > 0) {

@@ -23,6 +23,8 @@ export interface CliArgs {
   levels: Record<string, string>;
   types: Record<string, string>;
   maxRecords?: number;
+  /** MB one job may hold (0: no ceiling); undefined: the default. */
+  memoryLimit?: number;
   significantDigits?: number;
   /** Worker threads; undefined: 1 below 64 MB, else min(2, cores). */
   workers?: number;
@@ -47,6 +49,8 @@ Reading
   --encoding E                  utf-8, utf-16le, utf-16be or windows-1252; detected when absent
   --missing LIST                comma-separated missing-value tokens (empty cells always count)
   --max-records N               read only the first N records (a partial profile)
+  --memory-limit MB             memory one profile may use (default 8192; 0: no ceiling); past it,
+                                reading stops with an error and a profile of the records before
 Summaries
   --bins RULE|N|width=W         sqrt, sturges, rice, doane, scott, fd (default), auto, a count or a width
   --edges nice|exact            nice (default): rounded widths, every interval [a, b);
@@ -72,7 +76,8 @@ Other
   -q, --quiet                   no progress on stderr
   -h, --help, --version
 
-Exit status: 0 done, 1 a --fail-on condition was met, 2 unreadable input or bad options.
+Exit status: 0 done, 1 a --fail-on condition was met, 2 unreadable input, bad options, or reading
+stopped at the memory limit (the partial profile is still printed).
 `;
 
 const FORMATS = ['json', 'markdown', 'text'];
@@ -153,6 +158,7 @@ export function parseArgs(argv: string[]): CliArgs {
         break;
       }
       case '--max-records': a.maxRecords = whole('--max-records', value(), 1); break;
+      case '--memory-limit': a.memoryLimit = whole('--memory-limit', value(), 0); break;
       case '--significant-digits': a.significantDigits = whole('--significant-digits', value(), 1); break;
       case '--workers': a.workers = whole('--workers', value(), 1); break;
       case '--missing': a.missing = ['', ...value().split(',')]; break;

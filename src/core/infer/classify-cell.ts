@@ -57,6 +57,8 @@ export class CellClassifier {
   /** The tokens as UTF-8 bytes, by byte length, with their numbers (first listing wins). */
   private readonly tokenBytes: { bytes: Uint8Array; token: number }[][] = [];
   private readonly emptyToken: number;
+  /** 1 for each byte that begins a token: most cells (numbers, words) skip the token comparisons at once. */
+  private readonly tokenFirst = new Uint8Array(256);
 
   constructor(missingTokens: readonly string[], private readonly decimalSeparator: '.' | ',') {
     this.tokens = new Map();
@@ -67,6 +69,7 @@ export class CellClassifier {
     for (const [t, token] of this.tokens) {
       const bytes = encoder.encode(t);
       (this.tokenBytes[bytes.length] ??= []).push({ bytes, token });
+      if (bytes.length > 0) this.tokenFirst[bytes[0]!] = 1;
     }
     this.emptyToken = this.tokens.get('') ?? -1;
   }
@@ -98,7 +101,7 @@ export class CellClassifier {
       this.classify(decodeBytes(bytes, start, end), out);
       return false;
     }
-    const candidates = this.tokenBytes[n];
+    const candidates = this.tokenFirst[c] === 0 ? undefined : this.tokenBytes[n];
     if (candidates !== undefined) {
       for (const t of candidates) {
         if (sameBytes(bytes, start, t.bytes)) {
@@ -141,10 +144,21 @@ export class CellClassifier {
           return true;
         }
       }
+      if (this.tokenFirst[c] === 0 && !(n >= 10 && bytes[start + 4] === 45 && bytes[start + 7] === 45)) {
+        // Neither ISO nor D/M/YYYY can start so (a slash date has its separator after one or two
+        // digits; see parseDate): text, without decoding the cell (codes such as 6v08h0y9mg).
+        const b1 = bytes[start + 1]!;
+        const sep = b1 >= 48 && b1 <= 57 ? bytes[start + 2]! : b1;
+        if (sep !== 47 && sep !== 46 && sep !== 45) {
+          out.kind = KIND_TEXT;
+          out.value = NaN;
+          return false;
+        }
+      }
       this.classify(decodeBytes(bytes, start, end), out);
       return false;
     }
-    if (n >= 2 && n <= 5) {
+    if (n >= 2 && n <= 5 && BOOLEAN_FIRST[c] === 1) {
       // true, yes, false, no in any case: ASCII letters only.
       const b = wordBit(bytes, start, n);
       if (b >= 0) {
@@ -225,6 +239,10 @@ const WORDS = new Map([['true', 1], ['yes', 1], ['false', 0], ['no', 0]].map(([w
   for (let i = (w as string).length - 1; i >= 0; i--) key = key * 256 + (w as string).charCodeAt(i);
   return [key, v as number] as const;
 }));
+
+/** 1 for the letters a boolean word can begin with (t, y, f, n in either case). */
+const BOOLEAN_FIRST = new Uint8Array(256);
+for (const ch of 'tyfnTYFN') BOOLEAN_FIRST[ch.charCodeAt(0)] = 1;
 
 /** 1 for true/yes, 0 for false/no (any case), -1 otherwise; no string is made. */
 function wordBit(bytes: Uint8Array, start: number, n: number): number {

@@ -1,7 +1,8 @@
 // Turns one column's accumulator into its ColumnProfile: decides type and level, extracts the
 // typed values, computes the summaries the level allows, and collects the column's findings.
 import {
-  KIND_ABSENT, KIND_IMPOSSIBLE, KIND_MASK, KIND_MISSING, KIND_SLASH, MAX_TOKENS, unpackSlash,
+  KIND_ABSENT, KIND_BOOLEAN, KIND_DATE, KIND_DATETIME, KIND_DECIMAL, KIND_IMPOSSIBLE, KIND_INTEGER, KIND_MASK, KIND_MISSING,
+  KIND_SLASH, KIND_TEXT, MAX_TOKENS, unpackSlash,
 } from '../infer/classify-cell';
 import { inferLevel } from '../infer/infer-level';
 import { inferType } from '../infer/infer-type';
@@ -9,7 +10,8 @@ import { checkCalendar, daysFromCivil, isoFromMs } from '../infer/parse-date';
 import type { ProfileOptions, RuleId } from '../options';
 import type { ColumnAccumulator } from './column-accumulator';
 import { columnFlags, type PendingFlag } from './column-flags';
-import { frequencyTable, modes, naturalCompare, type Counted } from './frequency-table';
+import { byCountThenValue, firstSorted, frequencyTable, modes, naturalCompare, type Counted } from './frequency-table';
+import { radixSortFloat64 } from '../stats/radix-sort';
 import { numericSummary } from './numeric-summary';
 import type { ColumnProfile, ColumnType, DateStats, Level } from './types';
 
@@ -60,32 +62,54 @@ export function assembleColumn(acc: ColumnAccumulator, name: string, index: numb
   const numeric = type === 'integer' || type === 'decimal';
   const temporal = type === 'date' || type === 'datetime';
 
-  // Typed values per row, and the invalid cells.
+  // Typed values per row, and the invalid cells. The accumulator's own values serve as they are
+  // where no cell needs another reading (a slash date) or must be dropped (a number that does not
+  // fit the type): most columns, and then no row-sized copy is made.
   let rowValues: Float64Array | null = null;
   let invalid = 0;
   const invalidRows: number[] = [];
   const impossibleRows: number[] = [];
-  if (numeric || temporal) rowValues = new Float64Array(rows).fill(NaN);
-  for (let r = 0; r < rows; r++) {
+  let asRead = (numeric || temporal) && raw !== null;
+  // The kind counts tell whether any cell is unfit or a slash date; when none is, no row needs a look.
+  const c = acc.counts;
+  const present: [number, number][] = [
+    [KIND_INTEGER, c.integer], [KIND_DECIMAL, c.decimal], [KIND_BOOLEAN, c.boolean], [KIND_DATE, c.date],
+    [KIND_DATETIME, c.datetime], [KIND_SLASH, c.slash], [KIND_TEXT, c.text], [KIND_IMPOSSIBLE, c.impossible],
+  ];
+  const rowsToCheck = present.some(([kind, n]) => n > 0 && (kind === KIND_SLASH || !fits(kind))) ? rows : 0;
+  for (let r = 0; r < rowsToCheck; r++) {
     const kind = kinds[r]! & KIND_MASK;
     if (kind === KIND_ABSENT || kind >= KIND_MISSING) continue;
     if (!fits(kind)) {
       invalid++;
       if (kind === KIND_IMPOSSIBLE && temporal) impossibleRows.push(r);
       else invalidRows.push(r);
+      if (raw && !Number.isNaN(raw[r]!)) asRead = false;
       continue;
     }
-    if (!rowValues || !raw) continue;
-    if (kind === KIND_SLASH) {
-      const p = unpackSlash(raw[r]!);
-      const [d, m] = decision.slashOrder === 'day-first' ? [p.first, p.second] : [p.second, p.first];
-      if (checkCalendar(p.year, m, d)) {
-        invalid++;
-        impossibleRows.push(r);
-      } else rowValues[r] = daysFromCivil(p.year, m, d) * DAY_MS;
-    } else {
-      rowValues[r] = raw[r]!;
+    if (kind === KIND_SLASH) asRead = false;
+  }
+  if (asRead) rowValues = raw;
+  else if (numeric || temporal) {
+    rowValues = new Float64Array(rows).fill(NaN);
+    let slashImpossible = false;
+    for (let r = 0; r < rows && raw; r++) {
+      const kind = kinds[r]! & KIND_MASK;
+      if (kind === KIND_ABSENT || kind >= KIND_MISSING || !fits(kind)) continue;
+      if (kind === KIND_SLASH) {
+        const p = unpackSlash(raw[r]!);
+        const [d, m] = decision.slashOrder === 'day-first' ? [p.first, p.second] : [p.second, p.first];
+        if (checkCalendar(p.year, m, d)) {
+          invalid++;
+          impossibleRows.push(r);
+          slashImpossible = true;
+        } else rowValues[r] = daysFromCivil(p.year, m, d) * DAY_MS;
+      } else {
+        rowValues[r] = raw[r]!;
+      }
     }
+    // Rows in order, as one pass would have listed them.
+    if (slashImpossible) impossibleRows.sort((a, b) => a - b);
   }
 
   const count = rows - acc.missing;
@@ -96,7 +120,10 @@ export function assembleColumn(acc: ColumnAccumulator, name: string, index: numb
   // Distinct values: exact from the typed values where the column is numeric (the dictionary may
   // be capped), from the dictionary otherwise, estimated beyond the cap.
   let sorted: Float64Array | null = null;
-  if (rowValues) {
+  // Category code per row, read once for the sort below and the text rules.
+  const codes = acc.codes ? acc.codes.view() : null;
+  if (rowValues && codes) sorted = sortedByCode(rowValues, codes, acc.distinct);
+  if (rowValues && !sorted) {
     let n = 0;
     for (let r = 0; r < rows; r++) if (!Number.isNaN(rowValues[r]!)) n++;
     sorted = new Float64Array(n);
@@ -105,12 +132,13 @@ export function assembleColumn(acc: ColumnAccumulator, name: string, index: numb
       const v = rowValues[r]!;
       if (!Number.isNaN(v)) sorted[n++] = v;
     }
-    sorted.sort();
+    radixSortFloat64(sorted);
   }
   let distinct: number;
   let distinctExact = true;
   if (acc.capped) {
-    distinct = Math.max(acc.categories.size, acc.hll.estimate());
+    // The estimate's error (about 0.8%) can carry it past the cells there are: never more distinct values than cells.
+    distinct = Math.min(count, Math.max(acc.categories.size, acc.hll.estimate()));
     distinctExact = false;
   } else distinct = acc.categories.size;
 
@@ -152,7 +180,8 @@ export function assembleColumn(acc: ColumnAccumulator, name: string, index: numb
     stats: null,
     histogram: null,
     grouped: null,
-    frequencies: [...entries].sort((a, b) => b.count - a.count || naturalCompare(a.value, b.value)).slice(0, options.topN),
+    frequencies: firstSorted(entries, options.topN, byCountThenValue),
+    frequencyError: acc.capped ? acc.frequencyError : null,
     frequencyTable: discrete && !acc.capped ? frequencyTable(entries, options.topN, order, count) : null,
     sortedDistinct: sortedDistinct(entries, numeric, options.maxSortedDistinct, acc.capped, order),
     shape: null,
@@ -179,10 +208,51 @@ export function assembleColumn(acc: ColumnAccumulator, name: string, index: numb
   }
 
   const outcome = columnFlags({
-    acc, column, ctx, rowValues, invalidRows, impossibleRows, entries,
+    acc, column, ctx, rowValues, sorted, codes, invalidRows, impossibleRows, entries,
   });
   column.skippedRules = outcome.skipped;
   return { column, pending: outcome.pending, totals: outcome.totals, rowValues, sorted };
+}
+
+/**
+ * The non-NaN values of a coded column, sorted ascending, by counting (Knuth, The Art of Computer
+ * Programming vol. 3, §5.2, "sorting by counting"): a category code stands for one text, and one
+ * text reads as one value, so only the `distinct` values are sorted and each is written out as a
+ * run of its count. The result equals sorting the values themselves (−0 before +0, as
+ * Float64Array.prototype.sort). Null when a code turns out to carry two values or a value has no
+ * code; the caller then sorts the values. Cost: O(rows + distinct · log distinct).
+ * @example sortedByCode(Float64Array.of(5, NaN, 2, 5), Int32Array.of(0, -1, 1, 0), 2) // [2, 5, 5]
+ */
+export function sortedByCode(rowValues: Float64Array, codes: ArrayLike<number>, distinct: number): Float64Array | null {
+  const valueOf = new Float64Array(distinct);
+  const count = new Float64Array(distinct);
+  let n = 0;
+  for (let r = 0; r < rowValues.length; r++) {
+    const v = rowValues[r]!;
+    if (v !== v) continue;
+    const c = codes[r]!;
+    if (!(c >= 0 && c < distinct)) return null;
+    if (count[c] === 0) valueOf[c] = v;
+    else if (valueOf[c] !== v || (v === 0 && !Object.is(valueOf[c], v))) return null;
+    count[c]! += 1;
+    n++;
+  }
+  const used: number[] = [];
+  for (let c = 0; c < distinct; c++) if (count[c]! > 0) used.push(c);
+  const minusZero = (x: number): number => (Object.is(x, -0) ? 0 : 1);
+  used.sort((a, b) => {
+    const x = valueOf[a]!;
+    const y = valueOf[b]!;
+    return x < y ? -1 : x > y ? 1 : minusZero(x) - minusZero(y);
+  });
+  const out = new Float64Array(n);
+  let at = 0;
+  for (const c of used) {
+    const k = count[c]!;
+    out.fill(valueOf[c]!, at, at + k);
+    at += k;
+  }
+  return out;
 }
 
 function missingTokenCounts(acc: ColumnAccumulator, tokens: readonly string[]): { token: string; count: number }[] {

@@ -10,6 +10,13 @@
 const FILTER_FROM = 4096;
 /** 2^20 bits = 128 KiB; with the 100 000 values kept by default about 9% of misses get past it. */
 const FILTER_BITS = 20;
+/**
+ * Lookups per check of how often they miss. The filter costs a cache miss of its own when the table
+ * around it is large, and saves one only on a miss: it is consulted while at least 1 lookup in
+ * MISS_SHARE misses (a column of unique values), and skipped while most lookups find their value.
+ */
+const TUNE_EVERY = 8192;
+const MISS_SHARE = 8;
 /** Words per slot: hash, number + 1 (0: empty), and the packed key (see `packLow`/`packHigh`). */
 const W = 4;
 /** Length byte of a key too long to pack: the third word then holds the entry index. */
@@ -26,6 +33,8 @@ export interface DictionaryParts {
   hashes: Uint32Array;
   values: Int32Array;
   size: number;
+  /** Whether lookups consult the filter, and the lookups and misses counted since it was decided. */
+  tuning: [filtering: boolean, lookups: number, misses: number];
 }
 
 /**
@@ -47,14 +56,39 @@ export class ByteDictionary {
   hashes: Uint32Array = new Uint32Array(16);
   values: Int32Array = new Int32Array(16);
   size = 0;
+  /** Whether lookups consult the filter (see TUNE_EVERY); it is kept up to date either way. */
+  private filtering = true;
+  private lookups = 0;
+  private misses = 0;
 
   /** The number stored with these bytes, or -1 when they are absent. Numbers must be >= 0. */
   lookup(bytes: Uint8Array, start: number, end: number, hash: number): number {
     const filter = this.filter;
     if (filter !== null) {
-      const bit = hash >>> (32 - FILTER_BITS);
-      if ((filter[bit >>> 5]! & (1 << (bit & 31))) === 0) return -1;
+      if (++this.lookups === TUNE_EVERY) this.tune();
+      if (this.filtering) {
+        const bit = hash >>> (32 - FILTER_BITS);
+        if ((filter[bit >>> 5]! & (1 << (bit & 31))) === 0) {
+          this.misses++;
+          return -1;
+        }
+      }
+      const found = this.find(bytes, start, end, hash);
+      if (found < 0) this.misses++;
+      return found;
     }
+    return this.find(bytes, start, end, hash);
+  }
+
+  /** Decides from the last TUNE_EVERY lookups whether the next ones consult the filter. */
+  private tune(): void {
+    this.filtering = this.misses * MISS_SHARE >= TUNE_EVERY;
+    this.lookups = 0;
+    this.misses = 0;
+  }
+
+  /** `lookup` in the table itself. */
+  private find(bytes: Uint8Array, start: number, end: number, hash: number): number {
     const n = end - start;
     const table = this.table;
     const mask = this.mask;
@@ -95,7 +129,12 @@ export class ByteDictionary {
       next.set(this.arena.subarray(0, this.arenaLength));
       this.arena = next;
     }
-    this.arena.set(bytes.subarray(start, end), this.arenaLength);
+    // Short values byte by byte: a subarray of a Node Buffer costs more than copying a few bytes.
+    if (n <= 32) {
+      const arena = this.arena;
+      const at = this.arenaLength - start;
+      for (let i = start; i < end; i++) arena[at + i] = bytes[i]!;
+    } else this.arena.set(bytes.subarray(start, end), this.arenaLength);
     this.starts[k] = this.arenaLength;
     this.lengths[k] = n;
     this.hashes[k] = hash >>> 0;
@@ -103,8 +142,19 @@ export class ByteDictionary {
     this.arenaLength += n;
     this.size = k + 1;
     if (this.size * 2 > this.mask + 1) this.rehash((this.mask + 1) * 2);
-    else this.place(k);
+    this.place(k);
     return k;
+  }
+
+  /** Removes every entry, keeping the arrays (a Misra–Gries summary empties itself often). */
+  clear(): void {
+    this.table.fill(0);
+    this.filter = null;
+    this.filtering = true;
+    this.lookups = 0;
+    this.misses = 0;
+    this.arenaLength = 0;
+    this.size = 0;
   }
 
   /** Bytes of the arrays the dictionary holds (their capacity, not only what is used). */
@@ -122,7 +172,7 @@ export class ByteDictionary {
   /** The dictionary's arrays, not copied. */
   toParts(): DictionaryParts {
     const { table, filter, arena, arenaLength, starts, lengths, hashes, values, size } = this;
-    return { table, filter, arena, arenaLength, starts, lengths, hashes, values, size };
+    return { table, filter, arena, arenaLength, starts, lengths, hashes, values, size, tuning: [this.filtering, this.lookups, this.misses] };
   }
 
   /** Takes over the arrays of `toParts` (from this thread or another). */
@@ -137,6 +187,7 @@ export class ByteDictionary {
     this.hashes = p.hashes;
     this.values = p.values;
     this.size = p.size;
+    [this.filtering, this.lookups, this.misses] = p.tuning;
   }
 
   private equal(k: number, bytes: Uint8Array, start: number, n: number): boolean {
@@ -177,10 +228,26 @@ export class ByteDictionary {
     }
   }
 
+  /**
+   * Moves the slots into a table of `capacity` slots (entry `size - 1`, being inserted, is not in
+   * the table yet). A slot holds all its key needs, so the arena and the filter are not read.
+   */
   private rehash(capacity: number): void {
-    this.table = new Int32Array(capacity * W);
-    this.mask = capacity - 1;
-    for (let k = 0; k < this.size; k++) this.place(k);
+    const old = this.table;
+    const table = new Int32Array(capacity * W);
+    const mask = capacity - 1;
+    for (let at = 0; at < old.length; at += W) {
+      if (old[at + 1] === 0) continue;
+      let slot = old[at]! & mask;
+      while (table[slot * W + 1] !== 0) slot = (slot + 1) & mask;
+      const to = slot * W;
+      table[to] = old[at]!;
+      table[to + 1] = old[at + 1]!;
+      table[to + 2] = old[at + 2]!;
+      table[to + 3] = old[at + 3]!;
+    }
+    this.table = table;
+    this.mask = mask;
   }
 
   private growEntries(): void {

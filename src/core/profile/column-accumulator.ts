@@ -55,12 +55,14 @@ export class GrowableBytes {
     this.length += more.length;
   }
   push(v: number): void {
-    if (this.length === this.data.length) {
-      const next = new Uint8Array(Math.max(INITIAL, this.data.length * 2));
-      next.set(this.data);
-      this.data = next;
-    }
+    if (this.length === this.data.length) this.grow();
     this.data[this.length++] = v;
+  }
+  /** Doubles the capacity. */
+  grow(): void {
+    const next = new Uint8Array(Math.max(INITIAL, this.data.length * 2));
+    next.set(this.data);
+    this.data = next;
   }
   view(): Uint8Array {
     return this.data.subarray(0, this.length);
@@ -69,6 +71,13 @@ export class GrowableBytes {
 
 export interface AccumulatorLimits {
   maxDistinct: number;
+  /** Counters kept once a column passes maxDistinct (see `ColumnAccumulator.frequencyError`). */
+  heavyCounters: number;
+}
+
+/** The limits the options give: at least 1024 counters past the cap, and twice the frequencies shown. */
+export function accumulatorLimits(options: { maxDistinct: number; topN: number }): AccumulatorLimits {
+  return { maxDistinct: options.maxDistinct, heavyCounters: Math.min(options.maxDistinct, Math.max(1024, 2 * options.topN)) };
 }
 
 /**
@@ -87,6 +96,7 @@ export interface AccumulatorParts {
   dictionary: DictionaryParts;
   capped: boolean;
   uncountedCells: number;
+  frequencyError: number;
   /** Null until the column reached its cap (the sketch is allocated only then). */
   hll: Uint8Array | null;
   hllFilled: boolean;
@@ -115,16 +125,23 @@ export class ColumnAccumulator {
   /** Category code per row (-1 for missing); dropped when the column has too many distinct values. */
   codes: GrowableCodes | null = new GrowableCodes();
   /** Count per category code (codes number the distinct values in order of first appearance). */
-  readonly categoryCounts: number[] = [];
+  categoryCounts: number[] = [];
   /** The distinct values keyed by their bytes; each entry's value is its category code. */
-  readonly dictionary = new ByteDictionary();
+  dictionary = new ByteDictionary();
+  /**
+   * Past the cap the dictionary holds at most `limits.heavyCounters` values with Misra–Gries
+   * counters (Misra & Gries 1982, "Finding repeated elements"; merged as in Agarwal et al. 2012,
+   * "Mergeable summaries"): each kept count is at most `frequencyError` below the true count, and a
+   * value not kept occurs at most `frequencyError` times. The bound is at most n / (counters + 1).
+   */
+  frequencyError = 0;
   /** Distinct values (category codes given out). */
   distinct = 0;
   /**
    * Texts of non-ASCII values: different invalid UTF-8 bytes decode to the same text, and are then
    * one category (ASCII bytes and valid UTF-8 map one to one to texts, so need no check).
    */
-  private readonly wideTexts = new Map<string, number>();
+  private wideTexts = new Map<string, number>();
   private categoryTexts: Map<string, number> | null = null;
   /** True once the dictionary stopped taking new values. */
   capped = false;
@@ -138,7 +155,8 @@ export class ColumnAccumulator {
   private sketch: HyperLogLog | null = null;
   hllFilled = false;
   readonly tokenCounts = new Float64Array(MAX_TOKENS);
-  readonly counts: KindCounts = { integer: 0, decimal: 0, boolean: 0, date: 0, datetime: 0, slash: 0, text: 0, impossible: 0 };
+  /** Cells per kind (KIND_INTEGER .. KIND_IMPOSSIBLE), indexed by kind: one add per cell, no branch. */
+  private readonly kindCounts = new Float64Array(KIND_IMPOSSIBLE + 1);
   missing = 0;
   absent = 0;
   spaced = 0;
@@ -154,8 +172,8 @@ export class ColumnAccumulator {
   constructor(readonly classifier: CellClassifier, readonly limits: AccumulatorLimits) {}
 
   /**
-   * Bytes this accumulator holds, plus what assembling its column will add (the typed values twice:
-   * row-indexed and sorted; the codes widened to 4 bytes per row). An estimate for the memory
+   * Bytes this accumulator holds, plus what assembling its column will add (a sorted copy of the
+   * typed values; the codes widened to 4 bytes per row). An estimate for the memory
    * ceiling, counted from array capacities (JavaScript arrays at 8 bytes per entry).
    */
   heldBytes(): number {
@@ -163,7 +181,7 @@ export class ColumnAccumulator {
     const codes = this.codes ? this.codes.data.byteLength : 0;
     const held = this.kinds.data.byteLength + values + codes + this.dictionary.heldBytes()
       + (this.sketch?.registers.byteLength ?? 0) + (this.dense?.byteLength ?? 0) + this.categoryCounts.length * 8;
-    return held + 2 * values + (this.codes ? 4 * this.codes.length : 0);
+    return held + 8 * (this.values?.length ?? 0) + (this.codes ? 4 * this.codes.length : 0);
   }
 
   /** The distinct-value sketch (made on first use; see `sketch`). */
@@ -202,60 +220,84 @@ export class ColumnAccumulator {
     const r = this.reading;
     const canonical = this.classifier.classifyBytes(bytes, start, end, r);
     const rawKind = r.kind;
-    this.kinds.push(rawKind);
+    // The per-row stores written out (this runs once per cell): kind, value, code.
+    const kinds = this.kinds;
+    const row = kinds.length;
+    if (row === kinds.data.length) kinds.grow();
+    kinds.data[row] = rawKind;
+    kinds.length = row + 1;
     const kind = rawKind & KIND_MASK;
-    if (rawKind & KIND_SPACED) this.spaced++;
+    if (rawKind >= KIND_SPACED) this.spaced++;
+    const values = this.values;
     if (kind >= KIND_MISSING) {
       this.missing++;
       this.tokenCounts[kind - KIND_MISSING]! += 1;
-      this.values?.push(NaN);
+      if (values !== null) values.push(NaN);
       this.codes?.push(-1);
       return;
     }
-    this.countKind(kind);
+    this.kindCounts[kind]! += 1;
     const value = r.value;
     if (value === value) {
-      if (this.values === null) this.startValues();
-      this.values!.push(value);
-    } else {
-      this.values?.push(NaN);
-    }
+      if (values === null) this.startValues(value);
+      else values.push(value);
+    } else if (values !== null) values.push(NaN);
     if (this.hllFilled) this.sketch!.addHash(hash);
     let code: number;
-    if (canonical) {
+    const dense = this.dense;
+    if (canonical && (dense !== null || row + 1 >= DENSE_FROM)) {
       // The value determines the bytes: its code can be cached by value.
       const key = kind === KIND_DATE ? value / DAY_MS : value;
-      if (this.dense === null && this.kinds.length >= DENSE_FROM) {
-        this.dense = new Int32Array(DENSE).fill(-1);
-        this.denseKind = kind;
-        this.denseBase = key - DENSE / 2;
-      }
       const at = key - this.denseBase;
-      if (this.dense !== null && kind === this.denseKind && at >= 0 && at < DENSE) {
-        code = this.dense[at]!;
-        if (code < 0) {
-          code = this.code(bytes, start, end, hash);
-          this.dense[at] = code;
-        }
-      } else code = this.code(bytes, start, end, hash);
+      if (dense !== null) {
+        if (kind === this.denseKind && at >= 0 && at < DENSE) {
+          code = dense[at]!;
+          if (code < 0) {
+            code = this.code(bytes, start, end, hash);
+            // The lookup may have capped the column, which drops the cache.
+            if (this.dense !== null) this.dense[at] = code;
+          }
+        } else code = this.code(bytes, start, end, hash);
+      } else {
+        code = this.code(bytes, start, end, hash);
+        if (!this.capped) this.startDense(kind, key, code);
+      }
     } else code = this.code(bytes, start, end, hash);
     if (code < 0) this.uncountedCells++;
     else this.categoryCounts[code]! += 1;
     this.codes?.push(code);
   }
 
-  /** The cell's category code from the dictionary (new values added), or -1 beyond the cap. */
-  private code(bytes: Uint8Array, start: number, end: number, hash: number): number {
-    const code = this.dictionary.lookup(bytes, start, end, hash);
-    if (code >= 0 || this.capped) return code;
-    return this.newValue(bytes, start, end, hash);
+  /** Makes the dense cache around `key`, holding `code` (see `dense`). */
+  private startDense(kind: number, key: number, code: number): void {
+    const dense = new Int32Array(DENSE).fill(-1);
+    this.dense = dense;
+    this.denseKind = kind;
+    this.denseBase = key - DENSE / 2;
+    dense[DENSE / 2] = code;
   }
 
-  private startValues(): void {
+  /** The cell's category code from the dictionary (new values added), or -1 when no counter takes it. */
+  private code(bytes: Uint8Array, start: number, end: number, hash: number): number {
+    const code = this.dictionary.lookup(bytes, start, end, hash);
+    if (code >= 0) return code;
+    if (!this.capped) return this.newValue(bytes, start, end, hash);
+    if (this.distinct < this.limits.heavyCounters) return this.addValue(bytes, start, end, hash);
+    // Misra–Gries: no free counter, so this cell and one of every counter cancel out.
+    this.frequencyError++;
+    this.uncountedCells += this.distinct;
+    this.reduceBy(1);
+    return -1;
+  }
+
+  /** Makes the values at the first cell that has one (`first`): NaN for the rows before it. */
+  private startValues(first: number): void {
     const row = this.kinds.length - 1;
-    this.values = new GrowableFloat64(Math.max(INITIAL, row + 1));
-    this.values.data.fill(NaN, 0, row);
-    this.values.length = row;
+    const values = new GrowableFloat64(Math.max(INITIAL, row + 1));
+    values.data.fill(NaN, 0, row);
+    values.data[row] = first;
+    values.length = row + 1;
+    this.values = values;
   }
 
   /**
@@ -274,8 +316,23 @@ export class ColumnAccumulator {
     return m;
   }
 
-  /** A value not in the dictionary: its category code, or -1 when the cap is reached now. */
+  /** A value not in the dictionary, before the cap: its category code (counted past the cap, if reached now). */
   private newValue(bytes: Uint8Array, start: number, end: number, hash: number): number {
+    if (this.distinct >= this.limits.maxDistinct && this.wideCode(bytes, start, end) < 0) {
+      this.cap();
+      return this.code(bytes, start, end, hash);
+    }
+    return this.addValue(bytes, start, end, hash);
+  }
+
+  /** The code of a non-ASCII value with the same text as one kept (another invalid UTF-8 spelling), else -1. */
+  private wideCode(bytes: Uint8Array, start: number, end: number): number {
+    for (let i = start; i < end; i++) if (bytes[i]! >= 0x80) return this.wideTexts.get(decodeBytes(bytes, start, end)) ?? -1;
+    return -1;
+  }
+
+  /** Adds a value not in the dictionary (a new code, or the code of its text's other spelling). */
+  private addValue(bytes: Uint8Array, start: number, end: number, hash: number): number {
     let code = -1;
     let wide: string | null = null;
     for (let i = start; i < end; i++) {
@@ -286,10 +343,6 @@ export class ColumnAccumulator {
       }
     }
     if (code < 0) {
-      if (this.distinct >= this.limits.maxDistinct) {
-        this.cap();
-        return -1;
-      }
       code = this.distinct++;
       this.categoryCounts.push(0);
       if (wide !== null) this.wideTexts.set(wide, code);
@@ -301,7 +354,70 @@ export class ColumnAccumulator {
   private cap(): void {
     this.capped = true;
     this.codes = null;
+    this.dense = null;
     this.fillHll();
+    this.reduceToCounters();
+  }
+
+  /**
+   * Keeps at most `heavyCounters` values: when there are more, every count drops by the next
+   * largest count (the (k+1)-th), and the error bound grows by it (Agarwal et al. 2012, section 2).
+   */
+  private reduceToCounters(): void {
+    const k = this.limits.heavyCounters;
+    if (this.distinct <= k) return;
+    const sorted = Float64Array.from(this.categoryCounts.slice(0, this.distinct)).sort();
+    const by = sorted[sorted.length - 1 - k]!;
+    this.frequencyError += by;
+    let kept = 0;
+    for (let c = 0; c < this.distinct; c++) kept += Math.min(by, this.categoryCounts[c]!);
+    this.uncountedCells += kept;
+    this.reduceBy(by, true);
+  }
+
+  /**
+   * Lowers every counter by `by` and keeps the values still above zero, re-coded from 0 in their
+   * old order (so the first spelling of each still comes first, as \`categories\` expects).
+   */
+  private reduceBy(by: number, fresh = false): void {
+    const d = this.dictionary;
+    const counts = this.categoryCounts;
+    let survivors = false;
+    for (let c = 0; c < this.distinct && !survivors; c++) survivors = counts[c]! > by;
+    if (!survivors) {
+      // Every counter drops to zero (a column of unique values, past its cap): nothing to re-code.
+      if (fresh) this.dictionary = new ByteDictionary();
+      else d.clear();
+      this.wideTexts = new Map();
+      this.categoryCounts = [];
+      this.distinct = 0;
+      this.categoryTexts = null;
+      return;
+    }
+    const recode = new Int32Array(this.distinct).fill(-1);
+    const keep: { bytes: Uint8Array; hash: number; code: number }[] = [];
+    const next: number[] = [];
+    for (let e = 0; e < d.size; e++) {
+      const c = d.values[e]!;
+      const left = counts[c]! - by;
+      if (left <= 0) continue;
+      if (recode[c]! < 0) {
+        recode[c] = next.length;
+        next.push(left);
+      }
+      keep.push({ bytes: d.bytesOf(e).slice(), hash: d.hashes[e]!, code: recode[c]! });
+    }
+    // After the cap the tables sized for maxDistinct values are let go; later, emptied and reused.
+    if (fresh) this.dictionary = new ByteDictionary();
+    else d.clear();
+    this.wideTexts = new Map();
+    for (const x of keep) {
+      this.dictionary.insert(x.bytes, 0, x.bytes.length, x.hash, x.code);
+      if (x.bytes.some((b) => b >= 0x80)) this.wideTexts.set(decodeBytes(x.bytes, 0, x.bytes.length), x.code);
+    }
+    this.categoryCounts = next;
+    this.distinct = next.length;
+    this.categoryTexts = null;
   }
 
   /** Adds every dictionary value to the estimate (once), so that it covers the cells before the cap. */
@@ -312,18 +428,25 @@ export class ColumnAccumulator {
     for (let k = 0; k < d.size; k++) this.hll.addHash(d.hashes[k]!);
   }
 
-  private countKind(kind: number): void {
-    const c = this.counts;
-    switch (kind) {
-      case KIND_INTEGER: c.integer++; break;
-      case KIND_DECIMAL: c.decimal++; break;
-      case KIND_BOOLEAN: c.boolean++; break;
-      case KIND_DATE: c.date++; break;
-      case KIND_DATETIME: c.datetime++; break;
-      case KIND_SLASH: c.slash++; break;
-      case KIND_IMPOSSIBLE: c.impossible++; break;
-      case KIND_TEXT: c.text++; break;
-    }
+  /** Cells of each kind (a new object each time). */
+  get counts(): KindCounts {
+    const k = this.kindCounts;
+    return {
+      integer: k[KIND_INTEGER]!, decimal: k[KIND_DECIMAL]!, boolean: k[KIND_BOOLEAN]!, date: k[KIND_DATE]!,
+      datetime: k[KIND_DATETIME]!, slash: k[KIND_SLASH]!, text: k[KIND_TEXT]!, impossible: k[KIND_IMPOSSIBLE]!,
+    };
+  }
+
+  private setCounts(c: KindCounts): void {
+    const k = this.kindCounts;
+    k[KIND_INTEGER] = c.integer;
+    k[KIND_DECIMAL] = c.decimal;
+    k[KIND_BOOLEAN] = c.boolean;
+    k[KIND_DATE] = c.date;
+    k[KIND_DATETIME] = c.datetime;
+    k[KIND_SLASH] = c.slash;
+    k[KIND_TEXT] = c.text;
+    k[KIND_IMPOSSIBLE] = c.impossible;
   }
 
   /** The accumulator as plain data; its typed arrays are the accumulator's own (no copy). */
@@ -336,9 +459,9 @@ export class ColumnAccumulator {
       wideTexts: [...this.wideTexts],
       categoryCounts: Float64Array.from(this.categoryCounts),
       dictionary: this.dictionary.toParts(),
-      capped: this.capped, uncountedCells: this.uncountedCells,
+      capped: this.capped, uncountedCells: this.uncountedCells, frequencyError: this.frequencyError,
       hll: this.sketch ? this.sketch.registers : null, hllFilled: this.hllFilled,
-      tokenCounts: this.tokenCounts, counts: { ...this.counts },
+      tokenCounts: this.tokenCounts, counts: this.counts,
       missing: this.missing, absent: this.absent, spaced: this.spaced,
       dense: this.dense, denseKind: this.denseKind, denseBase: this.denseBase,
     };
@@ -362,10 +485,11 @@ export class ColumnAccumulator {
     a.dictionary.fromParts(p.dictionary);
     a.capped = p.capped;
     a.uncountedCells = p.uncountedCells;
+    a.frequencyError = p.frequencyError;
     if (p.hll) a.hll.registers.set(p.hll);
     a.hllFilled = p.hllFilled;
     a.tokenCounts.set(p.tokenCounts);
-    Object.assign(a.counts, p.counts);
+    a.setCounts(p.counts);
     a.missing = p.missing;
     a.absent = p.absent;
     a.spaced = p.spaced;
@@ -414,20 +538,25 @@ export class ColumnAccumulator {
         continue;
       }
       done[theirs] = 1;
-      if (mine < 0 && !this.capped) mine = this.newValue(b, 0, b.length, h);
+      // The union of both sides' values first; whether the result passes the cap is decided after.
+      if (mine < 0) mine = this.addValue(b, 0, b.length, h);
       remap[theirs] = mine;
     }
-    for (let c = 0; c < other.distinct; c++) {
-      const n = other.categoryCounts[c] ?? 0;
-      const mine = remap[c]!;
-      if (mine < 0) this.uncountedCells += n;
-      else this.categoryCounts[mine]! += n;
-    }
+    for (let c = 0; c < other.distinct; c++) this.categoryCounts[remap[c]!]! += other.categoryCounts[c] ?? 0;
     this.uncountedCells += other.uncountedCells;
-    if (other.capped) {
-      if (!this.capped) this.cap();
-    }
-    if (this.codes && other.codes) {
+    // Misra–Gries summaries merge by adding counters and errors, then keeping the largest
+    // (Agarwal et al. 2012); exact counts are a summary with error 0.
+    this.frequencyError += other.frequencyError;
+    if (this.capped || other.capped || this.distinct > this.limits.maxDistinct) {
+      this.capped = true;
+      this.codes = null;
+      this.dense = null;
+      // This side's dictionary holds the union now; the other's sketch covers what it saw past its cap.
+      this.fillHll();
+      other.fillHll();
+      this.hll.merge(other.hll);
+      this.reduceToCounters();
+    } else if (this.codes && other.codes) {
       const oc = other.codes;
       this.codes.reserve(this.codes.length + oc.length);
       for (let j = 0; j < oc.length; j++) {
@@ -436,13 +565,8 @@ export class ColumnAccumulator {
       }
     }
     other.codes = null;
-    if (this.capped) {
-      this.fillHll();
-      other.fillHll();
-      this.hll.merge(other.hll);
-    }
     for (let t = 0; t < MAX_TOKENS; t++) this.tokenCounts[t]! += other.tokenCounts[t]!;
-    for (const key of Object.keys(this.counts) as (keyof KindCounts)[]) this.counts[key] += other.counts[key];
+    for (let k = 0; k < this.kindCounts.length; k++) this.kindCounts[k]! += other.kindCounts[k]!;
     this.missing += other.missing;
     this.absent += other.absent;
     this.spaced += other.spaced;

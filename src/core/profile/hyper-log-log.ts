@@ -54,12 +54,7 @@ export function hashString(text: string): number {
     h ^= text.charCodeAt(i);
     h = Math.imul(h, 0x01000193);
   }
-  h ^= h >>> 16;
-  h = Math.imul(h, 0x85ebca6b);
-  h ^= h >>> 13;
-  h = Math.imul(h, 0xc2b2ae35);
-  h ^= h >>> 16;
-  return h >>> 0;
+  return fmix32(h);
 }
 
 /**
@@ -72,6 +67,12 @@ export function hashBytes(bytes: Uint8Array, start: number, end: number): number
     h ^= bytes[i]!;
     h = Math.imul(h, 0x01000193);
   }
+  return fmix32(h);
+}
+
+/** murmur3's 32-bit finaliser (Appleby, SMHasher "fmix32"): spreads every input bit over the high bits. */
+export function fmix32(lane: number): number {
+  let h = lane;
   h ^= h >>> 16;
   h = Math.imul(h, 0x85ebca6b);
   h ^= h >>> 13;

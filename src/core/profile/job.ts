@@ -11,8 +11,9 @@ import type { MutableRecordView } from '../read/record-view';
 import { sniffDialect, type Dialect } from '../read/sniff-dialect';
 import { createUtf8Transcoder, type Utf8Transcoder } from '../read/utf8-transcoder';
 import { assembleProfile } from './assemble-profile';
-import { ColumnAccumulator, GrowableFloat64 } from './column-accumulator';
+import { accumulatorLimits, ColumnAccumulator, GrowableFloat64 } from './column-accumulator';
 import { addRecordCells } from './add-record-cells';
+import { CellBatch } from './cell-batch';
 import { RecordKeySet } from './record-key-set';
 import { checkRecord, compileDeclared, declaredColumn, loadDeclared, type DeclaredSchema } from './declared-schema';
 import type { EncodingName, HeaderNote, Notice, RaggedRow } from './types';
@@ -30,6 +31,7 @@ const MAX_KEPT_TRANSCODED = 256 * 1024 * 1024;
 export const MAX_COLUMNS = 200_000;
 /** Bytes read between checks of the memory ceiling. */
 const MEMORY_CHECK_STEP = 1 << 20;
+const EMPTY_CHUNK = new Uint8Array(0);
 
 export interface RecordState {
   rows: number;
@@ -107,6 +109,8 @@ export class RangeJob {
   /** `state.bytes` when the memory ceiling was last checked (checks cost O(columns)). */
   private checkedAt = 0;
   private readonly startOffset: number;
+  /** The records' cells on their way to the columns (made with the columns). */
+  private batch: CellBatch | null = null;
 
   constructor(plan: RangePlan) {
     const bd = byteDialect({ delimiter: plan.dialect.delimiter, quote: plan.dialect.quote });
@@ -148,22 +152,35 @@ export class RangeJob {
     }
     st.names = names;
     const shared = new CellClassifier(st.options.missingTokens, st.dialect.decimalSeparator);
+    const limits = accumulatorLimits(st.options);
     st.columns = names.map((_, i) => {
       const declared = declaredColumn(st.declared, i);
       const classifier = declared ? new CellClassifier(declared.nullTokens, st.dialect.decimalSeparator) : shared;
-      return new ColumnAccumulator(classifier, { maxDistinct: st.options.maxDistinct });
+      return new ColumnAccumulator(classifier, limits);
     });
+    this.batch = new CellBatch(names.length);
   }
 
   push(utf8: Uint8Array): void {
     if (this.full || utf8.length === 0) return;
     this.state.bytes += utf8.length;
+    // The batch's cells point into the chunk until they are flushed, before this returns.
+    if (this.batch !== null) this.batch.chunk = utf8;
     this.scanner.push(utf8);
+    this.flushCells();
     const limit = this.state.options.memoryLimitBytes;
     if (limit !== null && !this.full && this.state.bytes - this.checkedAt >= MEMORY_CHECK_STEP) {
       this.checkedAt = this.state.bytes;
       if (this.heldBytes() > limit) this.stopAtLimit(limit);
     }
+  }
+
+  /** Adds the batched cells to the columns; the current chunk may go after this. */
+  private flushCells(): void {
+    const batch = this.batch;
+    if (batch === null) return;
+    batch.flush(this.state.columns);
+    batch.chunk = EMPTY_CHUNK;
   }
 
   /** What the job holds now, and what assembling will add (see ColumnAccumulator.heldBytes). */
@@ -190,6 +207,7 @@ export class RangeJob {
   end(): JobState {
     const sc = this.scanner;
     if (!this.full) sc.end();
+    this.flushCells();
     const st = this.state;
     st.scan = {
       lineBreaks: sc.lineBreaks, openLastLine: sc.lines > sc.lineBreaks, blankLines: sc.blankLines,
@@ -244,7 +262,9 @@ export class RangeJob {
     const declared = st.declared?.columns ? st.declared : null;
     if (declared) this.cells.length = 0;
     // The scanner's one view: its typed offset buffers are read directly (see add-record-cells).
-    const key = addRecordCells(r as MutableRecordView, st.byteDialect.quote, st.columns, declared ? this.cells : null, this.hash);
+    const batch = this.batch!;
+    const key = addRecordCells(r as MutableRecordView, st.byteDialect.quote, batch, declared ? this.cells : null, this.hash);
+    if (batch.full) batch.flush(st.columns);
     if (declared) checkRecord(declared, row, this.cells, options.rules.maxFlagsPerRule);
     const first = rec.seen.firstOrAdd(key.hi, key.lo, row);
     if (first !== 0) {

@@ -15,29 +15,39 @@ export function mergeStates(a: JobState, b: JobState): JobState {
   const rb = b.records;
   const bo = rb.offsets.view();
   const bl = rb.lines.view();
-  for (let i = 0; i < bo.length; i++) {
-    ra.offsets.push(bo[i]!);
-    ra.lines.push(bl[i]! + lineShift);
-  }
+  // In bulk, to the exact size: these hold one entry per record.
+  const at = ra.offsets.length;
+  ra.offsets.ensure(at + bo.length, true);
+  ra.offsets.data.set(bo, at);
+  ra.offsets.length = at + bo.length;
+  ra.lines.ensure(at + bl.length, true);
+  const lines = ra.lines.data;
+  for (let i = 0; i < bl.length; i++) lines[at + i] = bl[i]! + lineShift;
+  ra.lines.length = at + bl.length;
   for (const g of rb.ragged) {
     if (ra.ragged.length < 1000) ra.ragged.push({ ...g, row: g.row + rowShift, line: g.line + lineShift });
   }
   ra.raggedTotal += rb.raggedTotal;
-  // Keys first seen in b may have been seen in a already: those records repeat a's.
+  // Keys first seen in b may have been seen in a already: those records repeat a's. Only the
+  // first rows that b's listed duplicates point at need their new first row remembered.
   const firstOf = new Map<number, number>();
+  // One pass lists the first `cap` duplicates by row; keep the list near that while merging.
+  const cap = a.options.rules.maxFlagsPerRule * 4;
+  const byRow = (x: { row: number }, y: { row: number }) => x.row - y.row;
+  for (const d of rb.duplicates) firstOf.set(d.first, d.first + rowShift);
   for (const [key, row] of rb.seen) {
     const earlier = ra.seen.get(key);
     if (earlier === undefined) {
       ra.seen.set(key, row + rowShift);
-      firstOf.set(row, row + rowShift);
     } else {
       ra.duplicateTotal++;
       ra.duplicates.push({ row: row + rowShift, first: earlier });
-      firstOf.set(row, earlier);
+      if (ra.duplicates.length > 2 * cap) ra.duplicates = ra.duplicates.sort(byRow).slice(0, cap);
+      if (firstOf.has(row)) firstOf.set(row, earlier);
     }
   }
   for (const d of rb.duplicates) ra.duplicates.push({ row: d.row + rowShift, first: firstOf.get(d.first) ?? d.first + rowShift });
-  ra.duplicates.sort((x, y) => x.row - y.row);
+  ra.duplicates = ra.duplicates.sort(byRow).slice(0, cap);
   ra.duplicateTotal += rb.duplicateTotal;
   ra.rows += rb.rows;
   a.scan = {

@@ -4,7 +4,7 @@
 // and merges the ranges in order (merge-states.ts).
 import { CellClassifier } from '../infer/classify-cell';
 import { resolveOptions, type ProfileOptions, type RuleId } from '../options';
-import { ColumnAccumulator, GrowableFloat64, type AccumulatorParts } from './column-accumulator';
+import { accumulatorLimits, ColumnAccumulator, GrowableFloat64, type AccumulatorParts } from './column-accumulator';
 import type { JobState, RecordState } from './job';
 import { RecordKeySet } from './record-key-set';
 
@@ -63,7 +63,7 @@ export function serializeState(st: JobState): { data: SerializedState; transfer:
 export function deserializeState(data: SerializedState): JobState {
   const options = resolveOptions(data.options);
   const classifier = new CellClassifier(options.missingTokens, data.rest.dialect.decimalSeparator);
-  const limits = { maxDistinct: options.maxDistinct };
+  const limits = accumulatorLimits(options);
   const { offsets, lines, seen, ...recordRest } = data.records;
   const records: RecordState = {
     ...recordRest,

@@ -211,6 +211,12 @@ export interface ColumnProfile {
   histogram: Histogram | null;
   grouped: GroupedTable | null;
   frequencies: { value: string; count: number }[];
+  /**
+   * Null while every count is exact. Past the distinct cap the frequencies (and modes) come from a
+   * Misra–Gries summary: each listed count is at most this much below the true count, and a value
+   * not listed occurs at most this many times.
+   */
+  frequencyError: number | null;
   frequencyTable: FrequencyTable | null;
   /** Distinct values sorted (numerically for numbers), capped; null when too many. */
   sortedDistinct: string[] | null;

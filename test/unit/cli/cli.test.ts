@@ -63,6 +63,19 @@ describe('assay command line', () => {
     expect(r.stderr).toMatch(/^assay: .*does not look like delimited text.*gzip/);
   });
 
+  it('stops at --memory-limit with the partial profile on stdout, the reason on stderr and status 2', () => {
+    // 150 000 rows of two numbers hold well over 1 MB (at least 16 bytes per number: kept, and sorted for assembly).
+    const big = file('big.csv', 'i,r\n' + Array.from({ length: 150_000 }, (_, i) => `${i},${i / 8}`).join('\n') + '\n');
+    const r = run([big, '--format', 'json', '--memory-limit', '1', '-q']);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/^assay: .*big\.csv: Reading stopped near byte \d+ of the text: .* above the memory limit of 1 MB\./);
+    const p = JSON.parse(r.stdout) as Profile;
+    expect(p.partial).toBe(true);
+    expect(p.rows).toBeLessThan(150_000);
+    // The default ceiling (8192 MB) and none at all both read the whole file.
+    for (const args of [[], ['--memory-limit', '0']]) expect((JSON.parse(run([big, '--format', 'json', ...args]).stdout) as Profile).rows).toBe(150_000);
+  });
+
   it('takes rule thresholds, levels and types as options', () => {
     // 1..9 and 20: type-7 Q1 3.25, Q3 7.75, IQR 4.5; fences at k = 1.5: 14.5 (20 is out); at k = 3: 21.25 (20 is in).
     const f = file('k.csv', 'v\n' + [1, 2, 3, 4, 5, 6, 7, 8, 9, 20].join('\n') + '\n');

@@ -183,6 +183,20 @@ describe('panel behaviour', () => {
     await page.close();
   });
 
+  it('says that counts past the distinct cap are estimates, and by how much they may be low', async () => {
+    // The profile's own statement (frequencyError) is what the note must carry, whatever its value.
+    const capped = structuredClone(demo);
+    const origin = capped.columns.find((c) => c.name === 'origin')!;
+    Object.assign(origin, { distinctExact: false, frequencyError: 37, frequencyTable: null, sortedDistinct: null });
+    const panel = await openPanel(browser.context, server, {});
+    await panel.send({ type: 'profile', uri: URI, version: 8, fileLabel: 'delivery.csv', profile: capped, settings });
+    await panel.waitFor('rendered');
+    await panel.page.locator('.col-link', { hasText: 'origin' }).click();
+    const text = await panel.page.locator('.detail').innerText();
+    expect(text).toContain('Each count may be up to 37 below the true one, and a value not listed may occur up to 37 times more than the last one listed.');
+    await panel.page.close();
+  });
+
   it('keeps the selected column across a reload', async () => {
     const first = await openDemo();
     await first.page.locator('.col-link', { hasText: 'roast_loss_pct' }).click();

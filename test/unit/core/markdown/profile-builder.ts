@@ -25,6 +25,7 @@ export function buildColumn(partial: Partial<ColumnProfile> & Pick<ColumnProfile
     histogram: null,
     grouped: null,
     frequencies: [],
+    frequencyError: null,
     frequencyTable: null,
     sortedDistinct: null,
     shape: null,

@@ -37,6 +37,33 @@ describe('ByteDictionary', () => {
     );
   });
 
+  it('finds what a Map finds while lookups mostly hit and the miss filter is skipped, and after it is used again', () => {
+    // 6000 values (past the filter size), then 40 000 lookups that hit (the filter is then skipped),
+    // then 20 000 new values (mostly misses: the filter is consulted again), each checked on the way.
+    const d = new ByteDictionary();
+    const oracle = new Map<string, number>();
+    const step = (k: string): void => {
+      const b = enc.encode(k);
+      const h = hashBytes(b, 0, b.length);
+      const got = d.lookup(b, 0, b.length, h);
+      expect(got).toBe(oracle.get(k) ?? -1);
+      if (got < 0) {
+        d.insert(b, 0, b.length, h, oracle.size);
+        oracle.set(k, oracle.size);
+      }
+    };
+    for (let i = 0; i < 6000; i++) step(`v${i}`);
+    for (let i = 0; i < 40_000; i++) step(`v${(i * 7919) % 6000}`);
+    for (let i = 0; i < 20_000; i++) step(i % 3 === 0 ? `v${i % 6000}` : `w${i}`);
+    expect(d.size).toBe(oracle.size);
+    const parts = new ByteDictionary();
+    parts.fromParts(d.toParts());
+    for (const [k, v] of oracle) {
+      const b = enc.encode(k);
+      expect(parts.lookup(b, 0, b.length, hashBytes(b, 0, b.length))).toBe(v);
+    }
+  });
+
   it('survives toParts / fromParts', () => {
     const d = new ByteDictionary();
     for (let i = 0; i < 5000; i++) {

@@ -63,11 +63,11 @@ describe('parseSettings', () => {
     expect(fallback.ok && settings.values[key]).toEqual(fallback.ok && fallback.value);
   });
 
-  it('turns assay.memoryLimitMB into the job ceiling in bytes (4096 MB by default; 0: none)', () => {
-    expect(parse({}).settings.options.memoryLimitBytes).toBe(4096 * 1024 * 1024);
+  it('turns assay.memoryLimitMB into the job ceiling in bytes (8192 MB by default; 0: none)', () => {
+    expect(parse({}).settings.options.memoryLimitBytes).toBe(8192 * 1024 * 1024);
     expect(parse({ memoryLimitMB: 512 }).settings.options.memoryLimitBytes).toBe(512 * 1024 * 1024);
     expect(parse({ memoryLimitMB: 0 }).settings.options.memoryLimitBytes).toBeNull();
-    expect(parse({ memoryLimitMB: -1 }).problems).toEqual(['assay.memoryLimitMB: expected a whole number from 0 to 1048576, got -1; using 4096']);
+    expect(parse({ memoryLimitMB: -1 }).problems).toEqual(['assay.memoryLimitMB: expected a whole number from 0 to 1048576, got -1; using 8192']);
   });
 
   it('names unknown rule ids', () => {
