@@ -186,7 +186,7 @@ export class RangeJob {
   /** What the job holds now, and what assembling will add (see ColumnAccumulator.heldBytes). */
   heldBytes(): number {
     const rec = this.state.records;
-    let total = rec.offsets.data.byteLength + rec.lines.data.byteLength + rec.seen.rows.byteLength * 3;
+    let total = rec.offsets.data.byteLength + rec.lines.data.byteLength + rec.seen.slots.byteLength;
     for (const c of this.state.columns) total += c.heldBytes();
     return total;
   }

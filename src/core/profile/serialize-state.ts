@@ -18,7 +18,7 @@ export interface SerializedState {
   records: Omit<RecordState, 'offsets' | 'lines' | 'seen'> & {
     offsets: Float64Array;
     lines: Float64Array;
-    seen: { hi: Uint32Array; lo: Uint32Array; rows: Int32Array; size: number };
+    seen: { slots: Int32Array; size: number };
   };
 }
 
@@ -42,7 +42,7 @@ export function serializeState(st: JobState): { data: SerializedState; transfer:
       ...recordRest,
       offsets: offsets.data.subarray(0, offsets.length),
       lines: lines.data.subarray(0, lines.length),
-      seen: { hi: seen.hi, lo: seen.lo, rows: seen.rows, size: seen.size },
+      seen: { slots: seen.slots, size: seen.size },
     },
   };
   const buffers = new Set<ArrayBuffer>();
@@ -55,7 +55,7 @@ export function serializeState(st: JobState): { data: SerializedState; transfer:
     for (const a of [d.table, d.filter, d.arena, d.starts, d.lengths, d.hashes, d.values]) add(a);
   }
   const r = data.records;
-  for (const a of [r.offsets, r.lines, r.seen.hi, r.seen.lo, r.seen.rows]) add(a);
+  for (const a of [r.offsets, r.lines, r.seen.slots]) add(a);
   return { data, transfer: [...buffers] };
 }
 
@@ -69,7 +69,7 @@ export function deserializeState(data: SerializedState): JobState {
     ...recordRest,
     offsets: growable(offsets),
     lines: growable(lines),
-    seen: RecordKeySet.from(seen.hi, seen.lo, seen.rows, seen.size),
+    seen: RecordKeySet.from(seen.slots, seen.size),
   };
   return {
     ...data.rest,
