@@ -24,7 +24,7 @@ const outDir = join(root, 'bench-output');
 const cli = join(root, 'dist', 'cli.js');
 const MB = 1e6;
 /** The extension's default first pass (assay.firstPass.records). */
-const FIRST_PASS_RECORDS = 20_000;
+const FIRST_PASS_RECORDS = 10_000;
 
 function parseSize(text) {
   const m = /^(\d+(?:\.\d+)?)\s*(B|KB|MB|GB|KiB|MiB|GiB)?$/i.exec(text.trim());
@@ -211,7 +211,7 @@ async function main() {
   console.log(`machine: ${m.cpu}, ${m.cores} cores, ${m.memoryGiB} GiB, Node ${m.node}; load ${m.loadAverage.join(' ')}; effective parallelism ${m.effectiveParallelism}`);
 
   const raw = await rawRead(file.path);
-  // What the editor shows first on a large file: a profile of the first 20 000 records
+  // What the editor shows first on a large file: a profile of the first 10 000 records
   // (assay.firstPass.records), marked partial, from a fresh process (start-up included).
   const first = await runCli(file.path, 1, size, ['--max-records', String(FIRST_PASS_RECORDS)], 'first');
   const runs = [];

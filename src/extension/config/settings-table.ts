@@ -85,7 +85,7 @@ export const SETTINGS: readonly SettingSpec[] = [
   { key: 'rules.nearConstantShare', default: 0.99, check: number(0, 1, false, true), need: 'reprofile' },
   { key: 'rules.maxFlagsPerRule', default: 1000, check: number(1, 1_000_000, true), need: 'reprofile' },
   { key: 'firstPass.aboveBytes', default: 10_485_760, check: number(0, Infinity, true), need: 'reprofile' },
-  { key: 'firstPass.records', default: 20_000, check: number(100, 10_000_000, true), need: 'reprofile' },
+  { key: 'firstPass.records', default: 10_000, check: number(100, 10_000_000, true), need: 'reprofile' },
   { key: 'largeFile.aboveBytes', default: 52_428_800, check: number(0, Infinity, true), need: 'reprofile' },
   { key: 'memoryLimitMB', default: 8192, check: number(0, 1_048_576, true), need: 'reprofile' },
   { key: 'diagnostics.max', default: 1000, check: number(0, 1_000_000, true), need: 'diagnostics' },
