@@ -35,17 +35,12 @@ export function mergeStates(a: JobState, b: JobState): JobState {
   const cap = a.options.rules.maxFlagsPerRule * 4;
   const byRow = (x: { row: number }, y: { row: number }) => x.row - y.row;
   for (const d of rb.duplicates) firstOf.set(d.first, d.first + rowShift);
-  for (const [key, row] of rb.seen) {
-    const earlier = ra.seen.get(key);
-    if (earlier === undefined) {
-      ra.seen.set(key, row + rowShift);
-    } else {
-      ra.duplicateTotal++;
-      ra.duplicates.push({ row: row + rowShift, first: earlier });
-      if (ra.duplicates.length > 2 * cap) ra.duplicates = ra.duplicates.sort(byRow).slice(0, cap);
-      if (firstOf.has(row)) firstOf.set(row, earlier);
-    }
-  }
+  ra.seen.absorb(rb.seen, rowShift, (row, earlier) => {
+    ra.duplicateTotal++;
+    ra.duplicates.push({ row: row + rowShift, first: earlier });
+    if (ra.duplicates.length > 2 * cap) ra.duplicates = ra.duplicates.sort(byRow).slice(0, cap);
+    if (firstOf.has(row)) firstOf.set(row, earlier);
+  });
   for (const d of rb.duplicates) ra.duplicates.push({ row: d.row + rowShift, first: firstOf.get(d.first) ?? d.first + rowShift });
   ra.duplicates = ra.duplicates.sort(byRow).slice(0, cap);
   ra.duplicateTotal += rb.duplicateTotal;

@@ -101,6 +101,45 @@ export class RecordKeySet {
     }
   }
 
+  /**
+   * Adds every key of `other` (a later range, whose rows are shifted by `rowShift`); for a key this
+   * set already has, calls `repeat(otherRow, firstRow)` instead. Visits `other` with an odd stride,
+   * as the iterator does, and makes room once: merging ranges of millions of records.
+   */
+  absorb(other: RecordKeySet, rowShift: number, repeat: (row: number, first: number) => void): void {
+    let cap = this.mask + 1;
+    while ((this.size + other.size) * 4 > cap * 3) cap *= 2;
+    if (cap !== this.mask + 1) this.rehash(cap);
+    const o = other.slots;
+    const omask = other.mask;
+    const stride = (0x9e3779b1 & omask) | 1;
+    const s = this.slots;
+    const mask = this.mask;
+    for (let i = 0, k = 0; i <= omask; i++, k = (k + stride) & omask) {
+      const row = o[k * W + 2]!;
+      if (row === 0) continue;
+      const h = o[k * W]!;
+      const lo = o[k * W + 1]!;
+      let slot = mix(h >>> 0, lo) & mask;
+      for (;;) {
+        const at = slot * W;
+        const r = s[at + 2]!;
+        if (r === 0) {
+          s[at] = h;
+          s[at + 1] = lo;
+          s[at + 2] = row + rowShift;
+          this.size++;
+          break;
+        }
+        if (s[at] === h && s[at + 1] === lo) {
+          repeat(row, r);
+          break;
+        }
+        slot = (slot + 1) & mask;
+      }
+    }
+  }
+
   /** Restores a set from its slots (as `serializeState` sends them between threads). */
   static from(slots: Int32Array, size: number): RecordKeySet {
     const s = Object.create(RecordKeySet.prototype) as RecordKeySet;
@@ -111,8 +150,11 @@ export class RecordKeySet {
   }
 
   private grow(): void {
+    this.rehash((this.mask + 1) * 2);
+  }
+
+  private rehash(cap: number): void {
     const old = this.slots;
-    const cap = (this.mask + 1) * 2;
     const s = new Int32Array(cap * W);
     const mask = cap - 1;
     for (let at = 0; at < old.length; at += W) {

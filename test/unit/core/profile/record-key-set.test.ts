@@ -31,4 +31,37 @@ describe('RecordKeySet', () => {
       { numRuns: 30 },
     );
   });
+
+  it('absorbs a later set as a Map merge would: new keys with shifted rows, repeats reported once each', () => {
+    const keyPair = fc.tuple(fc.integer({ min: 0, max: 30 }), fc.integer({ min: 0, max: 0xfffff }));
+    fc.assert(
+      fc.property(fc.array(keyPair, { maxLength: 2000 }), fc.array(keyPair, { maxLength: 2000 }), (left, right) => {
+        const build = (pairs: [number, number][]) => {
+          const s = new RecordKeySet();
+          const m = new Map<number, number>();
+          pairs.forEach(([hiSmall, lo], i) => {
+            const hi = (hiSmall * 0x9e3779b1) >>> 0;
+            if (s.firstOrAdd(hi, lo, i + 1) === 0) m.set(hi * 0x100000 + lo, i + 1);
+          });
+          return { s, m };
+        };
+        const a = build(left);
+        const b = build(right);
+        const shift = left.length;
+        const repeats: [number, number][] = [];
+        a.s.absorb(b.s, shift, (row, first) => repeats.push([row, first]));
+        const expected = new Map(a.m);
+        const expectedRepeats: [number, number][] = [];
+        for (const [k, r] of b.m) {
+          const earlier = a.m.get(k);
+          if (earlier === undefined) expected.set(k, r + shift);
+          else expectedRepeats.push([r, earlier]);
+        }
+        expect(new Map(a.s)).toEqual(expected);
+        expect(a.s.size).toBe(expected.size);
+        expect(repeats.sort((x, y) => x[0] - y[0])).toEqual(expectedRepeats.sort((x, y) => x[0] - y[0]));
+      }),
+      { numRuns: 30 },
+    );
+  });
 });
