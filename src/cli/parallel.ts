@@ -7,7 +7,10 @@ import { availableParallelism } from 'node:os';
 import { isMainThread, parentPort, Worker, workerData } from 'node:worker_threads';
 import type { JobSource, ProfileResult } from '../core/engine';
 import { resolveOptions, type ProfileOptions } from '../core/options';
-import { assembleProfile } from '../core/profile/assemble-profile';
+import { assembleColumn, type AssembledColumn } from '../core/profile/assemble-column';
+import { assembleWork, packColumns, pickColumnsToSend, unpackResults, type ColumnResults, type ColumnWork } from '../core/profile/assemble-elsewhere';
+import { assembleProfile, columnContext } from '../core/profile/assemble-profile';
+import type { JobState } from '../core/profile/job';
 import { RangeJob, type RangePlan } from '../core/profile/job';
 import { joinRangeStates } from '../core/profile/join-range-states';
 import { planRanges, type RangeTask } from '../core/profile/plan-ranges';
@@ -61,10 +64,38 @@ export async function profileFileInWorkers(
     const merged = joinRangeStates(replies.map((r) => deserializeState(r.state)));
     if (merged === null) return { fallback: 'a range did not end at a record boundary' };
     const bom = merged.bomLength;
-    return assembleProfile(merged, (offset, length) => read(offset + bom, length));
+    const pre = await assembleInTwoThreads(merged);
+    return assembleProfile(merged, (offset, length) => read(offset + bom, length), pre);
   } finally {
     closeSync(fd);
   }
+}
+
+/**
+ * Assembles about half of the columns (by estimated work) in a worker thread while this thread
+ * assembles the rest: the same code on the same data, so the profile does not change.
+ */
+async function assembleInTwoThreads(st: JobState): Promise<Map<number, AssembledColumn>> {
+  const send = pickColumnsToSend(st);
+  const pre = new Map<number, AssembledColumn>();
+  if (send.length === 0) return pre;
+  const { work, transfer } = packColumns(st, send);
+  const remote = new Promise<ColumnResults>((resolve, reject) => {
+    const worker = new Worker(__filename, { workerData: { assayAssemble: true } });
+    worker.once('message', (m: { type: 'assembled'; results: ColumnResults } | { type: 'error'; message: string }) => {
+      void worker.terminate();
+      if (m.type === 'assembled') resolve(m.results);
+      else reject(new Error(m.message));
+    });
+    worker.once('error', reject);
+    worker.postMessage(work, transfer);
+  });
+  const sent = new Set(send);
+  st.columns.forEach((acc, i) => {
+    if (!sent.has(i)) pre.set(i, assembleColumn(acc, st.names[i]!, i, columnContext(st, i)));
+  });
+  for (const [i, a] of unpackResults(await remote)) pre.set(i, a);
+  return pre;
 }
 
 function runRange(request: RangeRequest, onProgress: (bytes: number) => void): Promise<{ state: SerializedState; invalidUtf8: number }> {
@@ -139,8 +170,19 @@ function profileRange(request: RangeRequest, onProgress: (bytes: number) => void
  */
 export function runWorkerIfAsked(): boolean {
   if (isMainThread || parentPort === null) return false;
-  const data = workerData as { assayRange?: RangeRequest; assayProfile?: { file: string; size: number; workers: number } } | null;
+  const data = workerData as { assayRange?: RangeRequest; assayProfile?: { file: string; size: number; workers: number }; assayAssemble?: true } | null;
   const port = parentPort;
+  if (data?.assayAssemble) {
+    port.once('message', (work: ColumnWork) => {
+      try {
+        const { results, transfer } = assembleWork(work);
+        port.postMessage({ type: 'assembled', results }, transfer);
+      } catch (e) {
+        port.postMessage({ type: 'error', message: e instanceof Error ? e.message : String(e) });
+      }
+    });
+    return true;
+  }
   if (data?.assayRange) {
     try {
       const { data: state, transfer, invalidUtf8 } = profileRange(data.assayRange, (bytes) => port.postMessage({ type: 'progress', bytes } satisfies WorkerReply));

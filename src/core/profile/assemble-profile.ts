@@ -3,7 +3,7 @@
 import type { ProfileResult, ProfileSession } from '../engine';
 import type { RuleId } from '../options';
 import { spanOfField, spanOfRecord } from '../read/cell-span';
-import { assembleColumn } from './assemble-column';
+import { assembleColumn, type AssembledColumn, type ColumnContext } from './assemble-column';
 import { capFlags, type PendingFlag } from './column-flags';
 import { severityOf } from '../rules/severity';
 import { declaredColumn } from './declared-schema';
@@ -17,7 +17,28 @@ import type { ColumnProfile, Flag, FlagTotal, GroupComparison, LineEnding, Profi
 /** Bytes read back for a record whose end is not known (the last one): enough for any sane record. */
 const TAIL_READ = 1 << 20;
 
-export function assembleProfile(st: JobState, read: ((offset: number, length: number) => Uint8Array) | null): ProfileResult {
+/** What column `i` of the state is assembled with: options, and what metadata declares for it. */
+export function columnContext(st: JobState, i: number): ColumnContext {
+  const { options } = st;
+  const name = st.names[i]!;
+  const dc = declaredColumn(st.declared, i);
+  return {
+    options,
+    declaredType: options.types[name] ?? dc?.type ?? null,
+    declaredLevel: dc?.level ?? (dc?.order ? 'ordinal' : null),
+    declaredOrder: dc?.order ?? null,
+    missingTokens: dc ? dc.nullTokens : options.missingTokens,
+    primaryKey: !!dc?.isPrimaryKeyPart && st.declared!.primaryKey.length === 1,
+  };
+}
+
+/**
+ * The profile of an ended job. `preassembled` holds columns already assembled elsewhere (another
+ * thread, from the same accumulator: the same result); the others are assembled here.
+ */
+export function assembleProfile(
+  st: JobState, read: ((offset: number, length: number) => Uint8Array) | null, preassembled: ReadonlyMap<number, AssembledColumn> | null = null,
+): ProfileResult {
   const { options, records } = st;
   const offsets = records.offsets.view().slice();
   const lines = records.lines.view().slice();
@@ -32,15 +53,7 @@ export function assembleProfile(st: JobState, read: ((offset: number, length: nu
   const allPending: { column: ColumnProfile | null; flags: PendingFlag[]; totals: Map<RuleId, number> }[] = [];
   st.columns.forEach((acc, i) => {
     const name = st.names[i]!;
-    const dc = declaredColumn(st.declared, i);
-    const { column, pending, totals, rowValues, sorted } = assembleColumn(acc, name, i, {
-      options,
-      declaredType: options.types[name] ?? dc?.type ?? null,
-      declaredLevel: dc?.level ?? (dc?.order ? 'ordinal' : null),
-      declaredOrder: dc?.order ?? null,
-      missingTokens: dc ? dc.nullTokens : options.missingTokens,
-      primaryKey: !!dc?.isPrimaryKeyPart && st.declared!.primaryKey.length === 1,
-    });
+    const { column, pending, totals, rowValues, sorted } = preassembled?.get(i) ?? assembleColumn(acc, name, i, columnContext(st, i));
     if (st.declared && options.rules.enabled.has('constraint')) {
       pending.push(...st.declared.flags.filter((f) => f.field === i));
       const t = st.declared.totals.get(i);

@@ -49,11 +49,7 @@ export function serializeState(st: JobState): { data: SerializedState; transfer:
   const add = (a: ArrayBufferView | null): void => {
     if (a && a.buffer instanceof ArrayBuffer && a.buffer.byteLength > 0) buffers.add(a.buffer);
   };
-  for (const c of data.columns) {
-    for (const a of [c.kinds, c.values, c.codes, c.categoryCounts, c.hll, c.tokenCounts, c.dense]) add(a);
-    const d = c.dictionary;
-    for (const a of [d.table, d.filter, d.arena, d.starts, d.lengths, d.hashes, d.values]) add(a);
-  }
+  for (const c of data.columns) accumulatorBuffers(c, buffers);
   const r = data.records;
   for (const a of [r.offsets, r.lines, r.seen.slots]) add(a);
   return { data, transfer: [...buffers] };
@@ -85,4 +81,14 @@ function growable(a: Float64Array): GrowableFloat64 {
   g.data = a;
   g.length = a.length;
   return g;
+}
+
+/** Adds the buffers of an accumulator's parts to `into`, for transfer to another thread. */
+export function accumulatorBuffers(c: AccumulatorParts, into: Set<ArrayBuffer>): void {
+  const add = (a: ArrayBufferView | null): void => {
+    if (a && a.buffer instanceof ArrayBuffer && a.buffer.byteLength > 0) into.add(a.buffer);
+  };
+  for (const a of [c.kinds, c.values, c.codes, c.categoryCounts, c.hll, c.tokenCounts, c.dense]) add(a);
+  const d = c.dictionary;
+  for (const a of [d.table, d.filter, d.arena, d.starts, d.lengths, d.hashes, d.values]) add(a);
 }
