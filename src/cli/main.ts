@@ -62,6 +62,8 @@ async function main(argv: string[]): Promise<number> {
       missingTokens: args.missing,
       maxRecords: args.maxRecords,
       memoryLimitBytes: memoryLimitBytes(args.memoryLimit ?? DEFAULT_MEMORY_LIMIT_MB),
+      // The CLI prints the profile and asks nothing of it afterwards.
+      retainValues: false,
     };
     if (args.bins !== undefined) input.bins = parseBinChoice(args.bins);
     input.rules = {

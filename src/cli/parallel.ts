@@ -10,7 +10,6 @@ import { resolveOptions, type ProfileOptions } from '../core/options';
 import { assembleColumn, type AssembledColumn } from '../core/profile/assemble-column';
 import { assembleWork, packColumns, pickColumnsToSend, unpackResults, type ColumnResults, type ColumnWork } from '../core/profile/assemble-elsewhere';
 import { assembleProfile, columnContext } from '../core/profile/assemble-profile';
-import type { JobState } from '../core/profile/job';
 import { RangeJob, type RangePlan } from '../core/profile/job';
 import { joinRangeStates } from '../core/profile/join-range-states';
 import { planRanges, type RangeTask } from '../core/profile/plan-ranges';
@@ -61,26 +60,38 @@ export async function profileFileInWorkers(
     })));
     // One pass reports where the first ill-formed byte is; rare enough to leave to one pass.
     if (replies.some((r) => r.invalidUtf8 > 0)) return { fallback: 'the file holds bytes that are not valid UTF-8' };
-    const merged = joinRangeStates(replies.map((r) => deserializeState(r.state)));
+    // The replies must not keep the ranges' arrays alive while they merge: each is let go as it is copied.
+    const states = replies.splice(0).map((r) => deserializeState(r.state));
+    // About half of the columns (by estimated work) are joined and assembled in another thread while
+    // this one joins the records and the other columns and assembles those.
+    let remote: Promise<ColumnResults> | null = null;
+    let sent: ReadonlySet<number> = new Set();
+    const merged = joinRangeStates(states, (ranges) => {
+      sent = new Set(pickColumnsToSend(ranges));
+      if (sent.size > 0) {
+        const p = assembleElsewhere(packColumns(ranges, [...sent]));
+        // Awaited below; this only keeps a failure there from counting as unhandled meanwhile.
+        p.catch(() => undefined);
+        remote = p;
+      }
+      return sent;
+    });
     if (merged === null) return { fallback: 'a range did not end at a record boundary' };
+    const pre = new Map<number, AssembledColumn>();
+    merged.columns.forEach((acc, i) => {
+      if (!sent.has(i)) pre.set(i, assembleColumn(acc, merged.names[i]!, i, columnContext(merged, i)));
+    });
+    if (remote) for (const [i, a] of unpackResults(await remote)) pre.set(i, a);
     const bom = merged.bomLength;
-    const pre = await assembleInTwoThreads(merged);
     return assembleProfile(merged, (offset, length) => read(offset + bom, length), pre);
   } finally {
     closeSync(fd);
   }
 }
 
-/**
- * Assembles about half of the columns (by estimated work) in a worker thread while this thread
- * assembles the rest: the same code on the same data, so the profile does not change.
- */
-async function assembleInTwoThreads(st: JobState): Promise<Map<number, AssembledColumn>> {
-  const send = pickColumnsToSend(st);
-  const pre = new Map<number, AssembledColumn>();
-  if (send.length === 0) return pre;
-  const { work, transfer } = packColumns(st, send);
-  const remote = new Promise<ColumnResults>((resolve, reject) => {
+/** Joins and assembles the packed columns in a worker thread: the same code on the same data as here. */
+function assembleElsewhere({ work, transfer }: { work: ColumnWork; transfer: ArrayBuffer[] }): Promise<ColumnResults> {
+  return new Promise<ColumnResults>((resolve, reject) => {
     const worker = new Worker(__filename, { workerData: { assayAssemble: true } });
     worker.once('message', (m: { type: 'assembled'; results: ColumnResults } | { type: 'error'; message: string }) => {
       void worker.terminate();
@@ -90,12 +101,6 @@ async function assembleInTwoThreads(st: JobState): Promise<Map<number, Assembled
     worker.once('error', reject);
     worker.postMessage(work, transfer);
   });
-  const sent = new Set(send);
-  st.columns.forEach((acc, i) => {
-    if (!sent.has(i)) pre.set(i, assembleColumn(acc, st.names[i]!, i, columnContext(st, i)));
-  });
-  for (const [i, a] of unpackResults(await remote)) pre.set(i, a);
-  return pre;
 }
 
 function runRange(request: RangeRequest, onProgress: (bytes: number) => void): Promise<{ state: SerializedState; invalidUtf8: number }> {

@@ -70,6 +70,13 @@ export interface ProfileOptions {
    * profile will add): past it, reading stops and the profile says so; null for no ceiling.
    */
   memoryLimitBytes: number | null;
+  /**
+   * Whether the profile's session keeps every column's values (by row and sorted) for re-binning,
+   * look-ups and group comparisons after assembly. A caller that asks nothing afterwards (the CLI)
+   * says false, and each column's per-row arrays are let go as soon as it is assembled: the peak
+   * is then the merged state plus one column's sorted copy per thread, not every column's.
+   */
+  retainValues: boolean;
 }
 
 export const DEFAULT_MISSING_TOKENS: readonly string[] = ['', 'NA', 'N/A', 'n/a', 'na', 'null', 'NULL', 'Null', 'NaN', 'nan', '-', '?', 'None', '#N/A'];
@@ -164,6 +171,7 @@ export function resolveOptions(input: ProfileOptionsInput = {}): ProfileOptions 
     rules,
     maxRecords: input.maxRecords ?? null,
     memoryLimitBytes: input.memoryLimitBytes == null ? null : positive('memoryLimitBytes', input.memoryLimitBytes, true),
+    retainValues: input.retainValues ?? true,
   };
   for (const [column, level] of Object.entries(options.levels)) {
     if (!['nominal', 'ordinal', 'interval', 'ratio'].includes(level)) throw new OptionError(`levels: "${column}" must be nominal, ordinal, interval or ratio, got "${String(level)}"`);

@@ -40,6 +40,11 @@ export interface AssembledColumn {
   sorted: Float64Array | null;
 }
 
+/** Whether assembled columns keep their values: for the session, or for the group comparisons. */
+export function keepsValues(options: ProfileOptions): boolean {
+  return options.retainValues || options.groupBy.length > 0;
+}
+
 export function assembleColumn(acc: ColumnAccumulator, name: string, index: number, ctx: ColumnContext): AssembledColumn {
   const { options } = ctx;
   const rows = acc.rows;
@@ -211,6 +216,11 @@ export function assembleColumn(acc: ColumnAccumulator, name: string, index: numb
     acc, column, ctx, rowValues, sorted, codes, invalidRows, impossibleRows, entries,
   });
   column.skippedRules = outcome.skipped;
+  // Nothing reads this column's rows again unless the session keeps them (see retainValues).
+  if (!keepsValues(options)) {
+    acc.releaseRows();
+    return { column, pending: outcome.pending, totals: outcome.totals, rowValues: null, sorted: null };
+  }
   return { column, pending: outcome.pending, totals: outcome.totals, rowValues, sorted };
 }
 

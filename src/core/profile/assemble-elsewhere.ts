@@ -10,10 +10,10 @@ import { accumulatorLimits, ColumnAccumulator, type AccumulatorParts } from './c
 import type { JobState } from './job';
 import { accumulatorBuffers } from './serialize-state';
 
-/** What goes to the other thread (structured-clone safe). */
+/** What goes to the other thread (structured-clone safe): per column, its part from each range, in file order. */
 export interface ColumnWork {
   decimalSeparator: '.' | ',';
-  columns: { index: number; name: string; parts: AccumulatorParts; ctx: Omit<ColumnContext, 'options'> & { options: unknown } }[];
+  columns: { index: number; name: string; parts: AccumulatorParts[]; ctx: Omit<ColumnContext, 'options'> & { options: unknown } }[];
 }
 
 /** What comes back: one assembled column per column sent, in the same order. */
@@ -23,17 +23,27 @@ export interface ColumnResults {
 
 /**
  * Which columns to send: a greedy split of the estimated work (rows, three times over where the
- * column holds numbers or dates, which are sorted and summarised) into two near-equal halves. Group-by
- * columns stay here: comparing groups reads their codes after assembly.
+ * column holds numbers or dates, which are sorted and summarised) into two near-equal halves. This
+ * thread starts with the records' share when the ranges are several (it joins their duplicate-record
+ * tables meanwhile, about four columns' worth in the benchmark's profile). Group-by columns stay
+ * here: comparing groups reads their codes after assembly.
  */
-export function pickColumnsToSend(st: JobState): number[] {
-  const cost = st.columns.map((c, i) => ({ i, w: c.rows * (c.values ? 3 : 1) }));
+export function pickColumnsToSend(ranges: JobState | readonly JobState[]): number[] {
+  const list = Array.isArray(ranges) ? (ranges as readonly JobState[]) : [ranges as JobState];
+  const first = list[0];
+  if (!first) return [];
+  const rows = list.reduce((n, st) => n + st.records.rows, 0);
+  const cost = first.columns.map((_, i) => {
+    let numeric = false;
+    for (const st of list) numeric ||= st.columns[i]!.values !== null;
+    return { i, w: rows * (numeric ? 3 : 1) };
+  });
   cost.sort((a, b) => b.w - a.w || a.i - b.i);
-  let here = 0;
+  let here = list.length > 1 ? 4 * rows : 0;
   let there = 0;
   const send: number[] = [];
   for (const { i, w } of cost) {
-    if (there < here && !st.options.groupBy.includes(st.names[i]!)) {
+    if (there < here && !first.options.groupBy.includes(first.names[i]!)) {
       send.push(i);
       there += w;
     } else here += w;
@@ -41,25 +51,38 @@ export function pickColumnsToSend(st: JobState): number[] {
   return send.sort((a, b) => a - b);
 }
 
-/** Packs the columns for the other thread; their accumulators here are used up (buffers transferred). */
-export function packColumns(st: JobState, indices: number[]): { work: ColumnWork; transfer: ArrayBuffer[] } {
+/**
+ * Packs the columns for the other thread, each as its parts from every range (the other thread
+ * appends them in order, as merging would here); their accumulators here are used up (buffers
+ * transferred).
+ */
+export function packColumns(ranges: JobState | readonly JobState[], indices: number[]): { work: ColumnWork; transfer: ArrayBuffer[] } {
+  const list = Array.isArray(ranges) ? (ranges as readonly JobState[]) : [ranges as JobState];
+  const st = list[0]!;
   const buffers = new Set<ArrayBuffer>();
   const columns = indices.map((index) => {
-    const parts = st.columns[index]!.toParts();
-    accumulatorBuffers(parts, buffers);
+    const parts = list.map((range) => {
+      const p = range.columns[index]!.toParts();
+      accumulatorBuffers(p, buffers);
+      return p;
+    });
     const { options, ...rest } = columnContext(st, index);
     return { index, name: st.names[index]!, parts, ctx: { ...rest, options: plainOptions(options) } };
   });
   return { work: { decimalSeparator: st.dialect.decimalSeparator, columns }, transfer: [...buffers] };
 }
 
-/** The other thread's side: rebuilds each accumulator and assembles it. */
+/** The other thread's side: rebuilds each column's accumulators, joins them in order, and assembles it. */
 export function assembleWork(work: ColumnWork): { results: ColumnResults; transfer: ArrayBuffer[] } {
   const transfer: ArrayBuffer[] = [];
   const columns = work.columns.map(({ index, name, parts, ctx }) => {
     const options = resolveOptions(ctx.options as Parameters<typeof resolveOptions>[0]);
     const classifier = new CellClassifier(ctx.missingTokens, work.decimalSeparator);
-    const acc = ColumnAccumulator.fromParts(parts, classifier, accumulatorLimits(options));
+    const limits = accumulatorLimits(options);
+    // One range at a time, so that each range's arrays can go as soon as they are appended.
+    const acc = ColumnAccumulator.fromParts(parts[0]!, classifier, limits);
+    for (let k = 1; k < parts.length; k++) acc.append(ColumnAccumulator.fromParts(parts[k]!, classifier, limits));
+    parts.length = 0;
     const a = assembleColumn(acc, name, index, { ...ctx, options });
     for (const v of [a.rowValues, a.sorted]) if (v && v.buffer instanceof ArrayBuffer && !transfer.includes(v.buffer)) transfer.push(v.buffer);
     return { index, assembled: { ...a, totals: [...a.totals] } };

@@ -190,7 +190,24 @@ export class ColumnAccumulator {
   }
 
   get rows(): number {
-    return this.kinds.length;
+    return this.releasedRows ?? this.kinds.length;
+  }
+
+  /** Rows counted before `releaseRows` let the per-row arrays go; null while they are held. */
+  private releasedRows: number | null = null;
+
+  /**
+   * Lets the per-row arrays (kinds, values, codes, dense counts) go once the column is assembled and
+   * nothing will read them again; counts, dictionary and sketches stay. Adding or appending after
+   * this is a programming error.
+   */
+  releaseRows(): void {
+    this.releasedRows = this.rows;
+    this.kinds.data = new Uint8Array(0);
+    this.kinds.length = 0;
+    this.values = null;
+    this.codes = null;
+    this.dense = null;
   }
 
   /** Adds the next row's cell; `text` null when the record had no such field. */

@@ -3,14 +3,19 @@
 // concatenate, dictionaries and counts add, and records repeated across ranges become duplicates.
 import type { JobState } from './job';
 
-/** Merges `b` (the range right after `a`) into `a`, and returns `a`. */
-export function mergeStates(a: JobState, b: JobState): JobState {
+/**
+ * Merges `b` (the range right after `a`) into `a`, and returns `a`. Columns in `elsewhere` are not
+ * appended here: another thread joins them (assemble-elsewhere.ts), and `a` keeps only its own part.
+ */
+export function mergeStates(a: JobState, b: JobState, elsewhere?: ReadonlySet<number>): JobState {
   if (a.columns.length !== b.columns.length) {
     throw new Error(`merge: ranges have ${a.columns.length} and ${b.columns.length} columns`);
   }
   const rowShift = a.records.rows;
   const lineShift = a.scan.lineBreaks;
-  a.columns.forEach((acc, i) => acc.append(b.columns[i]!));
+  a.columns.forEach((acc, i) => {
+    if (!elsewhere?.has(i)) acc.append(b.columns[i]!);
+  });
   const ra = a.records;
   const rb = b.records;
   const bo = rb.offsets.view();

@@ -3,7 +3,10 @@
 // generated columns where several codes share a value ("1" and "1.0") and rows have no value.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { resolveOptions, type ProfileOptions } from '../../../../src/core/options';
 import { sortedByCode } from '../../../../src/core/profile/assemble-column';
+import { assembleProfile } from '../../../../src/core/profile/assemble-profile';
+import { planDialect, RangeJob } from '../../../../src/core/profile/job';
 
 const bits = (a: Float64Array): number[] => Array.from(new Uint32Array(a.buffer, a.byteOffset, 2 * a.length));
 const codesOf = (list: readonly number[]): Int32Array => Int32Array.from(list);
@@ -32,3 +35,39 @@ describe('sortedByCode', () => {
     expect(sortedByCode(Float64Array.of(1, 2), codesOf([0, -1]), 1)).toBeNull();
   });
 });
+
+describe('retainValues: false (the CLI)', () => {
+  // The property is equality with the default (values kept for the session) plus the memory let go;
+  // the oracle is the engine's own default run on the same bytes.
+  const text = 'n,d,t\n' + Array.from({ length: 500 }, (_, i) => `${(i * 37) % 101},2024-01-${String((i % 28) + 1).padStart(2, '0')},${i % 3 ? 'x' : 'y'}`).join('\n') + '\n';
+  const bytes = new TextEncoder().encode(text);
+
+  it('gives the same profile and leaves no per-row arrays behind', () => {
+    const read = (o: number, l: number) => bytes.subarray(o, o + l);
+    const kept = assembleProfile(profileStateOf(bytes, resolveOptions({})), read);
+    const st = profileStateOf(bytes, resolveOptions({ retainValues: false }));
+    const { profile, session } = assembleProfile(st, read);
+    expect(profile).toEqual(kept.profile);
+    for (const acc of st.columns) {
+      expect(acc.values).toBeNull();
+      expect(acc.kinds.data.length).toBe(0);
+      expect(acc.rows).toBe(500);
+    }
+    // Nothing is kept to re-bin from; the default session can.
+    expect(session.rebin('n', { rule: 'sturges' }, 'nice')).toBeNull();
+    expect(kept.session.rebin('n', { rule: 'sturges' }, 'nice')?.histogram).not.toBeNull();
+  });
+
+  it('keeps the values when groups are compared', () => {
+    const st = profileStateOf(bytes, resolveOptions({ retainValues: false, groupBy: ['t'] }));
+    const { profile } = assembleProfile(st, (o, l) => bytes.subarray(o, o + l));
+    expect(profile.groups.length).toBeGreaterThan(0);
+    expect(st.columns[0]!.values).not.toBeNull();
+  });
+});
+
+function profileStateOf(bytes: Uint8Array, options: ProfileOptions) {
+  const job = new RangeJob({ options, source: { name: 't.csv' }, encoding: 'utf-8', bomLength: 0, dialect: planDialect(bytes, options), names: null, startOffset: 0, declared: null });
+  job.push(bytes);
+  return job.end();
+}

@@ -1,8 +1,12 @@
 // Test helper: profiles bytes the way the CLI's workers do, in one thread: plan the ranges, run
 // each, pass each state through serializeState -> structured clone (buffers transferred) ->
-// deserializeState, join, assemble. Falls back to one pass exactly where the CLI does.
+// deserializeState, join (about half of the columns joined and assembled "elsewhere", through
+// structured clones as postMessage makes them), assemble. Falls back to one pass exactly where the
+// CLI does.
 import { profileBytes } from '../../../../src/core/engine';
 import type { ProfileOptions } from '../../../../src/core/options';
+import type { AssembledColumn } from '../../../../src/core/profile/assemble-column';
+import { assembleWork, packColumns, pickColumnsToSend, unpackResults } from '../../../../src/core/profile/assemble-elsewhere';
 import { assembleProfile } from '../../../../src/core/profile/assemble-profile';
 import { RangeJob } from '../../../../src/core/profile/job';
 import { joinRangeStates } from '../../../../src/core/profile/join-range-states';
@@ -36,8 +40,17 @@ export function profileInRanges(bytes: Uint8Array, options: ProfileOptions, part
     return deserializeState(structuredClone(data, { transfer }));
   });
   // As the CLI: ill-formed UTF-8 is left to one pass, which says where the first one is.
-  const merged = invalid > 0 ? null : joinRangeStates(states);
+  let pre: Map<number, AssembledColumn> | null = null;
+  const merged = invalid > 0 ? null : joinRangeStates(states, (ranges) => {
+    const send = pickColumnsToSend(ranges);
+    if (send.length > 0) {
+      const { work, transfer } = packColumns(ranges, send);
+      const { results, transfer: back } = assembleWork(structuredClone(work, { transfer }));
+      pre = unpackResults(structuredClone(results, { transfer: back }));
+    }
+    return new Set(send);
+  });
   if (!merged) return { profile: profileBytes(bytes, options).profile, ranges: 1 };
   const bom = merged.bomLength;
-  return { profile: assembleProfile(merged, (o, l) => bytes.subarray(o + bom, o + bom + l)).profile, ranges: states.length };
+  return { profile: assembleProfile(merged, (o, l) => bytes.subarray(o + bom, o + bom + l), pre).profile, ranges: states.length };
 }
