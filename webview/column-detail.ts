@@ -78,7 +78,9 @@ export function columnDetail(ctx: PanelContext, c: ColumnProfile): ColumnDetail 
   const numericStats = isNumericStats(c.stats);
 
   const stats = section('Summary statistics', 'h3', button('Copy as Markdown', () => copy(ctx, 'column', c.name), 'btn secondary'));
-  stats.body.append(scroller(statsTable(c, ctx.digits, ctx.profile.methods.quantile)));
+  stats.body.append(scroller(statsTable(c, ctx.digits, c.approximate ? 'a rank sketch (approximate)' : ctx.profile.methods.quantile)));
+  // Optional read: profiles written before the member existed lack it.
+  if (c.approximate) stats.body.append(note(c.approximate.note));
 
   if (numericStats && c.histogram !== null) {
     numeric = numericSection(ctx, c);

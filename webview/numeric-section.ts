@@ -114,7 +114,10 @@ export function numericSection(ctx: PanelContext, c: ColumnProfile): NumericSect
         : 'Share of values below each bin’s upper edge.', 'muted'));
     }
     if (grouped === null || grouped.rows.length === 0) tableSlot.append(note('No grouped table for this column.'));
-    else tableSlot.append(scroller(groupedTable(grouped, ctx.digits, c.name)));
+    else {
+      tableSlot.append(scroller(groupedTable(grouped, ctx.digits, c.name)));
+      if (grouped.approximateNote) tableSlot.append(note(grouped.approximateNote));
+    }
   }
 
   draw();

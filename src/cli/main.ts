@@ -62,6 +62,7 @@ async function main(argv: string[]): Promise<number> {
       missingTokens: args.missing,
       maxRecords: args.maxRecords,
       memoryLimitBytes: memoryLimitBytes(args.memoryLimit ?? DEFAULT_MEMORY_LIMIT_MB),
+      exactValuesLimit: args.exactLimit,
       // The CLI prints the profile and asks nothing of it afterwards.
       retainValues: false,
     };

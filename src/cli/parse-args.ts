@@ -25,6 +25,7 @@ export interface CliArgs {
   maxRecords?: number;
   /** MB one job may hold (0: no ceiling); undefined: the default. */
   memoryLimit?: number;
+  exactLimit?: number;
   significantDigits?: number;
   /** Worker threads; undefined: 1 below 64 MB, else min(2, cores). */
   workers?: number;
@@ -51,6 +52,8 @@ Reading
   --max-records N               read only the first N records (a partial profile)
   --memory-limit MB             memory one profile may use (default 8192; 0: no ceiling); past it,
                                 reading stops with an error and a profile of the records before
+  --exact-limit N               numbers or dates a column keeps exactly (default 50000000); past it,
+                                a rank sketch: quantiles and histogram within a stated rank error
 Summaries
   --bins RULE|N|width=W         sqrt, sturges, rice, doane, scott, fd (default), auto, a count or a width
   --edges nice|exact            nice (default): rounded widths, every interval [a, b);
@@ -159,6 +162,7 @@ export function parseArgs(argv: string[]): CliArgs {
       }
       case '--max-records': a.maxRecords = whole('--max-records', value(), 1); break;
       case '--memory-limit': a.memoryLimit = whole('--memory-limit', value(), 0); break;
+      case '--exact-limit': a.exactLimit = whole('--exact-limit', value(), 1); break;
       case '--significant-digits': a.significantDigits = whole('--significant-digits', value(), 1); break;
       case '--workers': a.workers = whole('--workers', value(), 1); break;
       case '--missing': a.missing = ['', ...value().split(',')]; break;

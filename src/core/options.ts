@@ -77,6 +77,12 @@ export interface ProfileOptions {
    * is then the merged state plus one column's sorted copy per thread, not every column's.
    */
   retainValues: boolean;
+  /**
+   * Typed values (numbers, dates) a column keeps exactly, 8 bytes each; past it the column keeps a
+   * rank sketch instead, and its quantiles, histogram counts and robust measures are approximate
+   * within a rank error the profile states (ColumnProfile.approximate). Default 50 000 000.
+   */
+  exactValuesLimit: number;
 }
 
 export const DEFAULT_MISSING_TOKENS: readonly string[] = ['', 'NA', 'N/A', 'n/a', 'na', 'null', 'NULL', 'Null', 'NaN', 'nan', '-', '?', 'None', '#N/A'];
@@ -172,6 +178,7 @@ export function resolveOptions(input: ProfileOptionsInput = {}): ProfileOptions 
     maxRecords: input.maxRecords ?? null,
     memoryLimitBytes: input.memoryLimitBytes == null ? null : positive('memoryLimitBytes', input.memoryLimitBytes, true),
     retainValues: input.retainValues ?? true,
+    exactValuesLimit: positive('exactValuesLimit', input.exactValuesLimit ?? 50_000_000, true),
   };
   for (const [column, level] of Object.entries(options.levels)) {
     if (!['nominal', 'ordinal', 'interval', 'ratio'].includes(level)) throw new OptionError(`levels: "${column}" must be nominal, ordinal, interval or ratio, got "${String(level)}"`);

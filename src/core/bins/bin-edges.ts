@@ -120,9 +120,16 @@ function linspace(min: number, max: number, k: number): number[] {
  * //   edges: [0, 2, 4, 6, 8, 10], edgeMode: 'nice' }
  */
 export function binEdges(sorted: Float64Array, choice: BinChoice, mode: 'nice' | 'exact', maxBins = 250, moments?: Moments): BinEdges | null {
-  if (!Number.isInteger(maxBins) || maxBins < 1) throw new RangeError(`binEdges: maxBins must be a whole number of at least 1, got ${maxBins}`);
   const stats = binStats(sorted, moments);
-  if (stats === null) return null;
+  return stats === null ? null : binEdgesFromStats(stats, choice, mode, maxBins, sorted);
+}
+
+/**
+ * `binEdges` from the statistics the rules read (BinStats), for a column summarised by a sketch
+ * rather than kept sorted: every rule here reads only `stats`, so `sorted` may be empty.
+ */
+export function binEdgesFromStats(stats: BinStats, choice: BinChoice, mode: 'nice' | 'exact', maxBins = 250, sorted: Float64Array = new Float64Array(0)): BinEdges | null {
+  if (!Number.isInteger(maxBins) || maxBins < 1) throw new RangeError(`binEdges: maxBins must be a whole number of at least 1, got ${maxBins}`);
   const { min, max } = stats;
 
   if (min === max) {

@@ -69,7 +69,9 @@ export function columnSummarySpec(column: ColumnProfile, ctx: TableContext): Tab
   notes.unshift(`Type: ${column.typeReason}`, `Level: ${column.levelReason}`);
   // Optional read: profiles written before the member existed lack it.
   for (const s of column.skippedRules ?? []) notes.push(`Not checked by ${s.rule}: ${s.reason}`);
-  const quartiles = quantileType === null ? '' : `; quartiles by Hyndman & Fan type ${quantileType}`;
+  // Optional read, as above.
+  if (column.approximate) notes.push(column.approximate.note);
+  const quartiles = quantileType === null ? '' : column.approximate ? '; quartiles from a rank sketch' : `; quartiles by Hyndman & Fan type ${quantileType}`;
   return {
     caption: { file: ctx.file, column: column.name, method: `statistics for a ${column.level} column${quartiles}` },
     headers: ['Statistic', 'Value'],

@@ -20,6 +20,7 @@ export function groupedTableSpec(table: GroupedTable, column: string, ctx: Table
   const notes = [closedLast
     ? 'Each interval [a, b) holds a ≤ x < b; the last, [a, b], also holds its upper edge.'
     : 'Each interval [a, b) holds a ≤ x < b.'];
+  if (table.approximateNote) notes.push(table.approximateNote);
   return {
     caption: { file: ctx.file, column, method: `bins: ${table.label}` },
     headers: ['Interval', 'Count', 'Cumulative', 'Relative', 'Cumulative relative'],

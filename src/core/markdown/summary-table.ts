@@ -23,6 +23,11 @@ export function summaryTableSpec(profile: Profile, ctx: TableContext): TableSpec
   const notes: string[] = [];
   if (estimated) notes.push('Distinct counts marked ≈ are estimates: the column had more distinct values than were counted exactly.');
   if (profile.partial) notes.push(`First pass: these figures cover the first ${profile.rows} records only.`);
+  // Optional read: profiles written before the member existed lack it.
+  const sketched = profile.columns.filter((c) => c.approximate);
+  if (sketched.length > 0) {
+    notes.push(`Medians, quartiles, IQR and MAD of ${sketched.map((c) => `"${c.name}"`).join(', ')} come from a rank sketch (more values than are kept exactly): each within ${sketched.map((c) => c.approximate!.rankError).join(', ')} ranks of the exact one.`);
+  }
   return {
     caption: { file: ctx.file, column: null, method: `${profile.columns.length} columns; ${CENTRE_SPREAD_RULE}` },
     headers: ['Column', 'Type', 'Level', 'Count', 'Missing', 'Invalid', 'Distinct', 'Centre', 'Spread', 'Flags'],

@@ -12,7 +12,9 @@ import type { ColumnAccumulator } from './column-accumulator';
 import { columnFlags, type PendingFlag } from './column-flags';
 import { byCountThenValue, firstSorted, frequencyTable, modes, naturalCompare, type Counted } from './frequency-table';
 import { radixSortFloat64 } from '../stats/radix-sort';
-import { numericSummary } from './numeric-summary';
+import { approximateSummary, numericSummary, sketchedNumericSummary } from './numeric-summary';
+import type { ValueSketch } from './value-sketch';
+import type { KindCounts } from '../infer/infer-type';
 import type { ColumnProfile, ColumnType, DateStats, Level } from './types';
 
 const DAY_MS = 86_400_000;
@@ -38,6 +40,40 @@ export interface AssembledColumn {
   rowValues: Float64Array | null;
   /** The typed values, sorted ascending. */
   sorted: Float64Array | null;
+}
+
+/** Rules that list rows by their values, which a sketched column does not keep. */
+const ROW_LISTING_RULES: readonly RuleId[] = ['tukey-fence', 'modified-z', 'z-score', 'grubbs', 'generalized-esd', 'out-of-domain'];
+
+/**
+ * Stats, histogram and grouped table of a column kept as a sketch. The sketch holds integer and
+ * decimal cells together (and ISO dates and date-times together), so it stands for the column only
+ * when every such cell fits the column's type and no slash date (read only at assembly) is among them.
+ */
+function sketchedStats(column: ColumnProfile, vs: ValueSketch, fits: (kind: number) => boolean, counts: KindCounts, options: ProfileOptions): void {
+  const numeric = column.type === 'integer' || column.type === 'decimal';
+  const held: [number, number][] = numeric
+    ? [[KIND_INTEGER, counts.integer], [KIND_DECIMAL, counts.decimal]]
+    : [[KIND_DATE, counts.date], [KIND_DATETIME, counts.datetime], [KIND_SLASH, counts.slash]];
+  const sketch = numeric ? vs.numbers : vs.instants;
+  const ok = held.every(([kind, n]) => n === 0 || (fits(kind) && kind !== KIND_SLASH));
+  const summary = approximateSummary(sketch.n, sketch.rankError, !numeric);
+  if (!ok) {
+    column.approximate = { ...summary, note: `This column has more values than are kept exactly (${sketch.n}), and its sketch mixes cells that do not all read as ${column.type} values, so no quantiles, histogram or spread are given. Raise the exact-values limit to profile it exactly.` };
+    return;
+  }
+  column.approximate = summary;
+  if (numeric) {
+    const s = sketchedNumericSummary(vs, column.level, options, counts.decimal === 0);
+    column.stats = s.stats;
+    column.histogram = s.histogram;
+    column.grouped = s.grouped;
+    column.shape = s.shape;
+  } else if (sketch.n > 0) {
+    const m = vs.instantMoments;
+    const dateOnly = column.type === 'date';
+    column.stats = { count: sketch.n, min: isoFromMs(m.min!, dateOnly), max: isoFromMs(m.max!, dateOnly), median: isoFromMs(sketch.quantile(0.5), dateOnly) };
+  }
 }
 
 /** Whether assembled columns keep their values: for the session, or for the group comparisons. */
@@ -94,8 +130,10 @@ export function assembleColumn(acc: ColumnAccumulator, name: string, index: numb
     }
     if (kind === KIND_SLASH) asRead = false;
   }
+  // A sketched column has no row-indexed values (see ColumnAccumulator.valueSketch).
+  const sketched = acc.valueSketch;
   if (asRead) rowValues = raw;
-  else if (numeric || temporal) {
+  else if ((numeric || temporal) && sketched === null) {
     rowValues = new Float64Array(rows).fill(NaN);
     let slashImpossible = false;
     for (let r = 0; r < rows && raw; r++) {
@@ -148,10 +186,11 @@ export function assembleColumn(acc: ColumnAccumulator, name: string, index: numb
   } else distinct = acc.categories.size;
 
   const distinctValues = entries.map((x) => x.value);
+  const sketchMoments = sketched ? (numeric ? sketched.numberMoments : sketched.instantMoments) : null;
   const levelDecision = inferLevel({
     name, type, distinctValues, distinct, count,
-    min: sorted && sorted.length ? sorted[0]! : null,
-    max: sorted && sorted.length ? sorted[sorted.length - 1]! : null,
+    min: sorted && sorted.length ? sorted[0]! : sketchMoments?.min ?? null,
+    max: sorted && sorted.length ? sorted[sorted.length - 1]! : sketchMoments?.max ?? null,
   });
   let level = levelDecision.level;
   let levelReason = levelDecision.reason;
@@ -187,6 +226,7 @@ export function assembleColumn(acc: ColumnAccumulator, name: string, index: numb
     grouped: null,
     frequencies: firstSorted(entries, options.topN, byCountThenValue),
     frequencyError: acc.capped ? acc.frequencyError : null,
+    approximate: null,
     frequencyTable: discrete && !acc.capped ? frequencyTable(entries, options.topN, order, count) : null,
     sortedDistinct: sortedDistinct(entries, numeric, options.maxSortedDistinct, acc.capped, order),
     shape: null,
@@ -210,12 +250,19 @@ export function assembleColumn(acc: ColumnAccumulator, name: string, index: numb
       median: isoFromMs(sorted[Math.ceil(sorted.length / 2) - 1]!, dateOnly),
     };
     column.stats = stats;
+  } else if (sketched && (numeric || temporal)) {
+    sketchedStats(column, sketched, decision.fits, acc.counts, options);
   }
 
   const outcome = columnFlags({
     acc, column, ctx, rowValues, sorted, codes, invalidRows, impossibleRows, entries,
   });
   column.skippedRules = outcome.skipped;
+  if (sketched && numeric && (level === 'interval' || level === 'ratio')) {
+    for (const rule of ROW_LISTING_RULES) {
+      if (options.rules.enabled.has(rule)) column.skippedRules.push({ rule, reason: 'the column has more values than are kept exactly (exactValuesLimit), so its rows are not kept to list' });
+    }
+  }
   // Nothing reads this column's rows again unless the session keeps them (see retainValues).
   if (!keepsValues(options)) {
     acc.releaseRows();

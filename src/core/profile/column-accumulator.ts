@@ -11,6 +11,7 @@ import type { KindCounts } from '../infer/infer-type';
 import { ByteDictionary, type DictionaryParts } from './byte-dictionary';
 import { GrowableCodes } from './growable-codes';
 import { hashBytes, HyperLogLog } from './hyper-log-log';
+import { sketchCapacity, ValueSketch, type ValueSketchParts } from './value-sketch';
 
 /**
  * Entries every per-row buffer starts with. Small, because a file of 100 000 columns makes 100 000
@@ -73,11 +74,13 @@ export interface AccumulatorLimits {
   maxDistinct: number;
   /** Counters kept once a column passes maxDistinct (see `ColumnAccumulator.frequencyError`). */
   heavyCounters: number;
+  /** Typed values kept exactly per column; past it the column keeps a sketch (see ValueSketch). */
+  exactValues?: number;
 }
 
 /** The limits the options give: at least 1024 counters past the cap, and twice the frequencies shown. */
-export function accumulatorLimits(options: { maxDistinct: number; topN: number }): AccumulatorLimits {
-  return { maxDistinct: options.maxDistinct, heavyCounters: Math.min(options.maxDistinct, Math.max(1024, 2 * options.topN)) };
+export function accumulatorLimits(options: { maxDistinct: number; topN: number; exactValuesLimit?: number }): AccumulatorLimits {
+  return { maxDistinct: options.maxDistinct, heavyCounters: Math.min(options.maxDistinct, Math.max(1024, 2 * options.topN)), exactValues: options.exactValuesLimit ?? Infinity };
 }
 
 /**
@@ -108,6 +111,10 @@ export interface AccumulatorParts {
   dense: Int32Array | null;
   denseKind: number;
   denseBase: number;
+  /** Typed values held (non-NaN entries of `values`). */
+  valueCount: number;
+  /** Set once the column passed the exact-values limit (then `values` is null). */
+  valueSketch: ValueSketchParts | null;
 }
 
 const encoder = new TextEncoder();
@@ -122,6 +129,14 @@ export class ColumnAccumulator {
   readonly kinds = new GrowableBytes();
   /** Number, time or packed date per row; NaN where the cell has none. Allocated at the first such cell. */
   values: GrowableFloat64 | null = null;
+  /** Non-NaN entries of `values`. */
+  valueCount = 0;
+  /**
+   * Past `limits.exactValues` typed values the column keeps no row-indexed values: they go to this
+   * sketch, and quantiles, histogram counts and robust measures become approximate with a stated
+   * rank error (the extreme-value rules, which list rows, are then skipped for the column).
+   */
+  valueSketch: ValueSketch | null = null;
   /** Category code per row (-1 for missing); dropped when the column has too many distinct values. */
   codes: GrowableCodes | null = new GrowableCodes();
   /** Count per category code (codes number the distinct values in order of first appearance). */
@@ -180,7 +195,8 @@ export class ColumnAccumulator {
     const values = this.values?.data.byteLength ?? 0;
     const codes = this.codes ? this.codes.data.byteLength : 0;
     const held = this.kinds.data.byteLength + values + codes + this.dictionary.heldBytes()
-      + (this.sketch?.registers.byteLength ?? 0) + (this.dense?.byteLength ?? 0) + this.categoryCounts.length * 8;
+      + (this.sketch?.registers.byteLength ?? 0) + (this.dense?.byteLength ?? 0) + this.categoryCounts.length * 8
+      + (this.valueSketch?.heldBytes ?? 0);
     return held + 8 * (this.values?.length ?? 0) + (this.codes ? 4 * this.codes.length : 0);
   }
 
@@ -256,8 +272,11 @@ export class ColumnAccumulator {
     this.kindCounts[kind]! += 1;
     const value = r.value;
     if (value === value) {
-      if (values === null) this.startValues(value);
-      else values.push(value);
+      if (values !== null) {
+        values.push(value);
+        if (++this.valueCount > this.exactValues) this.startSketch();
+      } else if (this.valueSketch !== null) this.valueSketch.add(kind, value);
+      else this.startValues(value);
     } else if (values !== null) values.push(NaN);
     if (this.hllFilled) this.sketch!.addHash(hash);
     let code: number;
@@ -315,6 +334,29 @@ export class ColumnAccumulator {
     values.data[row] = first;
     values.length = row + 1;
     this.values = values;
+    this.valueCount = 1;
+    if (this.valueCount > this.exactValues) this.startSketch();
+  }
+
+  private get exactValues(): number {
+    return this.limits.exactValues ?? Infinity;
+  }
+
+  /** Moves the values kept so far into a sketch, in row order, and lets the row-indexed array go. */
+  startSketch(): void {
+    if (this.valueSketch !== null) return;
+    const sketch = new ValueSketch(sketchCapacity(this.exactValues));
+    const values = this.values;
+    if (values !== null) {
+      const kinds = this.kinds.data;
+      const v = values.data;
+      for (let r = 0; r < values.length; r++) {
+        const x = v[r]!;
+        if (x === x) sketch.add(kinds[r]! & KIND_MASK, x);
+      }
+    }
+    this.valueSketch = sketch;
+    this.values = null;
   }
 
   /**
@@ -481,6 +523,7 @@ export class ColumnAccumulator {
       tokenCounts: this.tokenCounts, counts: this.counts,
       missing: this.missing, absent: this.absent, spaced: this.spaced,
       dense: this.dense, denseKind: this.denseKind, denseBase: this.denseBase,
+      valueCount: this.valueCount, valueSketch: this.valueSketch ? this.valueSketch.toParts() : null,
     };
   }
 
@@ -513,6 +556,8 @@ export class ColumnAccumulator {
     a.dense = p.dense;
     a.denseKind = p.denseKind;
     a.denseBase = p.denseBase;
+    a.valueCount = p.valueCount;
+    a.valueSketch = p.valueSketch ? ValueSketch.fromParts(p.valueSketch) : null;
     return a;
   }
 
@@ -524,10 +569,18 @@ export class ColumnAccumulator {
   append(other: ColumnAccumulator): void {
     const base = this.rows;
     const otherRows = other.rows;
+    // Past the limit together, both sides keep sketches (made from their rows before these go).
+    if (this.valueSketch || other.valueSketch || this.valueCount + other.valueCount > this.exactValues) {
+      this.startSketch();
+      other.startSketch();
+      this.valueSketch!.merge(other.valueSketch!);
+    }
+    this.valueCount += other.valueCount;
     this.kinds.pushAll(other.kinds.view());
     other.kinds.data = new Uint8Array(0);
     other.kinds.length = 0;
-    if (other.values || this.values) {
+    if (this.valueSketch) other.values = null;
+    else if (other.values || this.values) {
       if (!this.values) {
         this.values = new GrowableFloat64(Math.max(1024, base));
         this.values.data.fill(NaN, 0, base);

@@ -1,7 +1,7 @@
 // The numeric summaries of one column, from its sorted values: moments, quantiles, robust
 // measures, the histogram and grouped frequency table, and the shape check. Which of them a reader
 // should use depends on the level; the panel and the reports show only those.
-import { binEdges } from '../bins/bin-edges';
+import { binEdges, binEdgesFromStats } from '../bins/bin-edges';
 import { groupedTable } from '../bins/grouped-table';
 import { histogramCountsSorted } from '../bins/histogram-counts';
 import type { BinChoice, ProfileOptions } from '../options';
@@ -12,8 +12,10 @@ import { meanAndSd } from '../stats/mean-and-sd';
 import { Moments } from '../stats/moments';
 import { quantileSorted } from '../stats/quantile';
 import { shapiroWilk } from '../stats/shapiro-wilk';
+import { sketchMad, sketchTrimmedMean, weightBelow } from '../stats/rank-sketch';
 import { trimmedMean } from '../stats/trimmed-mean';
-import type { GroupedTable, Histogram, Level, NumericStats, ShapeCheck, ShapeTest } from './types';
+import type { ApproximateSummary, GroupedTable, Histogram, Level, NumericStats, ShapeCheck, ShapeTest } from './types';
+import type { ValueSketch } from './value-sketch';
 
 export const SHAPE_CAUTION =
   'A normality test can only fail to find a departure from the normal shape; a high p-value is not proof that the data are normal, and with many values even a harmless departure gives a low p-value. Look at the histogram too.';
@@ -90,23 +92,90 @@ export function numericSummary(sorted: Float64Array, _rowValues: Float64Array, l
   };
   if (ALWAYS_NUMBERS.some((k) => !Number.isFinite(stats[k]))) return { stats: null, histogram: null, grouped: null, shape: null };
   const { histogram, grouped } = binValues(sorted, options.bins, options.edges, m);
+  return { stats, histogram, grouped, shape: shapeCheck(level, n, min, max, m, sorted) };
+}
+
+/** What a sketched column's reader is told (ColumnProfile.approximate). */
+export function approximateSummary(n: number, rankError: number, dates = false): ApproximateSummary {
+  const relative = n > 0 ? rankError / n : 0;
+  const pct = relative === 0 ? '0' : (100 * relative).toPrecision(2);
+  const within = `within ${rankError} ranks (${pct}% of the values) of the exact one`;
+  return {
+    method: 'rank-sketch', values: n, rankError, relativeRankError: relative,
+    note: dates
+      ? `This column has more dates than are kept exactly (${n}), so its median comes from a rank sketch: ${within}. Count, earliest and latest are exact.`
+      : `This column has more values than are kept exactly (${n}), so its median, quartiles, IQR, MAD, trimmed mean and histogram come from a rank sketch: each quantile is ${within}, each histogram count within ${2 * rankError}. Count, sum, mean, SD, min and max are exact; outlier rules that list rows are not run on it.`,
+  };
+}
+
+/**
+ * The numeric summary of a column kept as a sketch (more typed values than `exactValuesLimit`):
+ * count, sum, mean, SD, shape moments, min and max exact from one-pass moments (Welford/Pébay, see
+ * moments.ts); quartiles by the sketch's inverse distribution function (Hyndman & Fan type 1 on
+ * the sketch), MAD and trimmed mean from its weighted items, histogram counts from its ranks
+ * (each within 2 × rankError). `integer`: every value is a whole number (for the bin rules).
+ */
+export function sketchedNumericSummary(vs: ValueSketch, level: Level, options: ProfileOptions, integer: boolean): NumericSummary {
+  const m = vs.numberMoments;
+  const n = m.n;
+  const items = vs.numbers.sortedItems();
+  const q = (p: number) => vs.numbers.quantile(p, items);
+  const q1 = q(0.25);
+  const median = q(0.5);
+  const q3 = q(0.75);
+  const min = m.min ?? NaN;
+  const max = m.max ?? NaN;
+  const sd = m.sd ?? 0;
+  const ratio = level === 'ratio';
+  const stats: NumericStats = {
+    count: n, sum: m.total, mean: m.mean, sd, variance: sd * sd, sem: n > 1 ? sd / Math.sqrt(n) : 0,
+    min, max, range: max - min, q1, median, q3, iqr: q3 - q1,
+    mad: sketchMad(items, median), trimmedMean: sketchTrimmedMean(items, 0.1),
+    skewness: finiteOrNull(m.skewness), kurtosis: finiteOrNull(m.kurtosis), cv: ratio ? finiteOrNull(m.cv) : null,
+    geometricMean: ratio && min > 0 && vs.nonPositive === 0 ? finiteOrNull(Math.exp(vs.logs.mean)) : null,
+    quantileType: 1,
+  };
+  if (ALWAYS_NUMBERS.some((k) => !Number.isFinite(stats[k]))) return { stats: null, histogram: null, grouped: null, shape: null };
+  // The bin rules read only these statistics; the IQR is the sketch's.
+  const m2 = m.m2 / n;
+  const edges = binEdgesFromStats({
+    n, min, max, sd, populationSd: m.populationSd ?? 0, iqr: q3 - q1, skewness: m2 > 0 ? m.m3 / n / Math.pow(m2, 1.5) : 0, integer,
+  }, options.bins, options.edges);
+  let histogram: Histogram | null = null;
+  let grouped: GroupedTable | null = null;
+  if (edges && edges.edges.every(Number.isFinite)) {
+    const e = edges.edges;
+    const closedLast = edges.edgeMode === 'exact';
+    const counts: number[] = [];
+    for (let i = 0; i + 1 < e.length; i++) {
+      const last = i + 2 === e.length;
+      counts.push(weightBelow(items, e[i + 1]!, last && closedLast) - weightBelow(items, e[i]!));
+    }
+    histogram = { rule: edges.rule, label: edges.label, edgeMode: edges.edgeMode, width: edges.width, edges: e, counts };
+    grouped = { ...groupedTable(e, counts, closedLast, edges.rule, edges.label), approximateNote: `Counts from a rank sketch: each within ${2 * vs.numbers.rankError} of the exact count.` };
+  }
+  return { stats, histogram, grouped, shape: shapeCheck(level, n, min, max, m, null) };
+}
+
+/** The normality tests a level calls for; `sorted` null when only moments are known (a sketch). */
+function shapeCheck(level: Level, n: number, min: number, max: number, m: Moments, sorted: Float64Array | null): ShapeCheck | null {
   let shape: ShapeCheck | null = null;
   if (level === 'interval' || level === 'ratio') {
     const tests: ShapeTest[] = [];
     const skipped: string[] = [];
-    if (n >= 3 && n <= 5000 && max > min) {
+    if (n >= 3 && n <= 5000 && max > min && sorted) {
       const sw = shapiroWilk(sorted);
       if (sw && Number.isFinite(sw.w) && Number.isFinite(sw.p)) tests.push({ method: 'shapiro-wilk', statistic: sw.w, p: sw.p, n });
       else if (sw) skipped.push('Shapiro-Wilk could not be computed: the values are too extreme for double-precision arithmetic');
-    } else skipped.push(n < 3 ? 'Shapiro-Wilk needs at least 3 values' : n > 5000 ? 'Shapiro-Wilk (Royston) is defined for up to 5000 values' : 'all values are equal');
+    } else skipped.push(n < 3 ? 'Shapiro-Wilk needs at least 3 values' : n > 5000 ? 'Shapiro-Wilk (Royston) is defined for up to 5000 values' : !(max > min) ? 'all values are equal' : 'Shapiro-Wilk needs every value, and this column is summarised by a sketch');
     if (n >= 20 && max > min) {
-      const dp = dagostinoPearson(sorted, m);
+      const dp = dagostinoPearson(sorted ?? [], m);
       if (dp && Number.isFinite(dp.k2) && Number.isFinite(dp.p)) tests.push({ method: 'dagostino-pearson', statistic: dp.k2, p: dp.p, n });
       else if (dp) skipped.push("D'Agostino-Pearson could not be computed: the values are too extreme for double-precision arithmetic");
     } else skipped.push(n < 20 ? "D'Agostino-Pearson needs at least 20 values" : 'all values are equal');
     shape = { tests, skipped, caution: SHAPE_CAUTION };
   }
-  return { stats, histogram, grouped, shape };
+  return shape;
 }
 
 function finiteOrNull(x: number | null | undefined): number | null {

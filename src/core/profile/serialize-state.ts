@@ -91,4 +91,5 @@ export function accumulatorBuffers(c: AccumulatorParts, into: Set<ArrayBuffer>):
   for (const a of [c.kinds, c.values, c.codes, c.categoryCounts, c.hll, c.tokenCounts, c.dense]) add(a);
   const d = c.dictionary;
   for (const a of [d.table, d.filter, d.arena, d.starts, d.lengths, d.hashes, d.values]) add(a);
+  if (c.valueSketch) for (const a of [...c.valueSketch.numbers.levels, ...c.valueSketch.instants.levels]) add(a);
 }

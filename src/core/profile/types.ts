@@ -81,6 +81,23 @@ export interface Notice {
   line?: number;
 }
 
+/** How a sketched column's order statistics relate to the exact ones (see ColumnProfile.approximate). */
+export interface ApproximateSummary {
+  method: 'rank-sketch';
+  /** Values summarised (all of them: count, sum, mean, SD, min and max stay exact). */
+  values: number;
+  /**
+   * Guaranteed bound on the rank error: each quantile (median, quartiles) is a value whose rank
+   * among the exact values is within this many places of the asked rank, and each histogram or
+   * grouped-table count is within twice this of the exact count.
+   */
+  rankError: number;
+  /** rankError / values. */
+  relativeRankError: number;
+  /** What the reader should know, in words. */
+  note: string;
+}
+
 export interface NumericStats {
   count: number;
   sum: number;
@@ -149,6 +166,8 @@ export interface GroupedTable {
   label: string;
   rows: GroupedRow[];
   total: number;
+  /** Set when the counts come from a rank sketch (see ColumnProfile.approximate): how far off they can be. */
+  approximateNote?: string;
 }
 
 export interface FrequencyRow {
@@ -217,6 +236,12 @@ export interface ColumnProfile {
    * not listed occurs at most this many times.
    */
   frequencyError: number | null;
+  /**
+   * Null when the column's quantiles, histogram and robust measures come from every value. Set when
+   * the column had more typed values than are kept exactly (`exactValuesLimit`): they come from a
+   * rank sketch, and each is within the stated rank error of the exact one.
+   */
+  approximate: ApproximateSummary | null;
   frequencyTable: FrequencyTable | null;
   /** Distinct values sorted (numerically for numbers), capped; null when too many. */
   sortedDistinct: string[] | null;

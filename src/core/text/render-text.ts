@@ -54,6 +54,8 @@ export function renderText(profile: Profile, options: TextOptions): string {
   if (profile.columns.length > 0) {
     out.push('');
     out.push(textTable(summaryTableSpec(profile, { file: options.fileLabel, significantDigits: d, maxCellLength: 40 }), d));
+    // Optional read: profiles written before the member existed lack it.
+    for (const c of profile.columns) if (c.approximate) out.push(`${c.name}: ${c.approximate.note}`);
   }
   const flags = [...profile.recordFlags, ...profile.columns.flatMap((c) => c.flags)]
     .sort((a, b) => a.row - b.row || (a.field ?? -1) - (b.field ?? -1));

@@ -63,6 +63,7 @@ export function parseSettings(get: (key: string) => unknown): ParsedSettings {
       levels: v('levels') as Record<string, Level>,
       // 0: no ceiling.
       memoryLimitBytes: (v('memoryLimitMB') as number) === 0 ? null : (v('memoryLimitMB') as number) * 1024 * 1024,
+      exactValuesLimit: v('exactValuesLimit') as number,
       rules: {
         enabled: v('rules.enabled') as RuleId[],
         tukeyK: v('rules.tukeyK') as number,

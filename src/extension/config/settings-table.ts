@@ -88,6 +88,7 @@ export const SETTINGS: readonly SettingSpec[] = [
   { key: 'firstPass.records', default: 10_000, check: number(100, 10_000_000, true), need: 'reprofile' },
   { key: 'largeFile.aboveBytes', default: 52_428_800, check: number(0, Infinity, true), need: 'reprofile' },
   { key: 'memoryLimitMB', default: 8192, check: number(0, 1_048_576, true), need: 'reprofile' },
+  { key: 'exactValuesLimit', default: 50_000_000, check: number(1, 1_000_000_000, true), need: 'reprofile' },
   { key: 'diagnostics.max', default: 1000, check: number(0, 1_000_000, true), need: 'diagnostics' },
   { key: 'significantDigits', default: 4, check: number(1, 15, true), need: 'render' },
   { key: 'levels', default: {}, check: levelMap, need: 'reprofile' },

@@ -76,6 +76,15 @@ describe('assay command line', () => {
     for (const args of [[], ['--memory-limit', '0']]) expect((JSON.parse(run([big, '--format', 'json', ...args]).stdout) as Profile).rows).toBe(150_000);
   });
 
+  it('summarises a column past --exact-limit by a rank sketch and says so', () => {
+    const f = file('many.csv', 'v\n' + Array.from({ length: 3000 }, (_, i) => String((i * 7919) % 3001)).join('\n') + '\n');
+    const sketched = JSON.parse(run([f, '--format', 'json', '--exact-limit', '1000']).stdout) as Profile;
+    expect(sketched.columns[0]!.approximate?.method).toBe('rank-sketch');
+    expect(JSON.parse(run([f, '--format', 'json']).stdout).columns[0].approximate).toBeNull();
+    expect(run([f, '--exact-limit', '1000']).stdout).toMatch(/^v: This column has more values than are kept exactly \(3000\)/m);
+    expect(run([f, '--exact-limit', '0']).status).toBe(2);
+  });
+
   it('takes rule thresholds, levels and types as options', () => {
     // 1..9 and 20: type-7 Q1 3.25, Q3 7.75, IQR 4.5; fences at k = 1.5: 14.5 (20 is out); at k = 3: 21.25 (20 is in).
     const f = file('k.csv', 'v\n' + [1, 2, 3, 4, 5, 6, 7, 8, 9, 20].join('\n') + '\n');

@@ -197,6 +197,24 @@ describe('panel behaviour', () => {
     await panel.page.close();
   });
 
+  it('says when quantiles and histogram counts come from a rank sketch, and within how many ranks', async () => {
+    // The profile's own statement (approximate, grouped.approximateNote) is what the panel must carry.
+    const sketched = structuredClone(demo);
+    const weight = sketched.columns.find((c) => c.name === 'green_weight_kg')!;
+    const note = 'This column has more values than are kept exactly (486), so its median comes from a rank sketch: within 12 ranks.';
+    weight.approximate = { method: 'rank-sketch', values: 486, rankError: 12, relativeRankError: 12 / 486, note };
+    weight.grouped = { ...weight.grouped!, approximateNote: 'Counts from a rank sketch: each within 24 of the exact count.' };
+    const panel = await openPanel(browser.context, server, {});
+    await panel.send({ type: 'profile', uri: URI, version: 9, fileLabel: 'delivery.csv', profile: sketched, settings });
+    await panel.waitFor('rendered');
+    await panel.page.locator('.col-link', { hasText: 'green_weight_kg' }).click();
+    const text = await panel.page.locator('.detail').innerText();
+    expect(text).toContain(note);
+    expect(text).toContain('quartiles by a rank sketch (approximate)');
+    expect(text).toContain('Counts from a rank sketch: each within 24 of the exact count.');
+    await panel.page.close();
+  });
+
   it('keeps the selected column across a reload', async () => {
     const first = await openDemo();
     await first.page.locator('.col-link', { hasText: 'roast_loss_pct' }).click();

@@ -26,6 +26,7 @@ export function buildColumn(partial: Partial<ColumnProfile> & Pick<ColumnProfile
     grouped: null,
     frequencies: [],
     frequencyError: null,
+    approximate: null,
     frequencyTable: null,
     sortedDistinct: null,
     shape: null,

@@ -70,6 +70,12 @@ describe('parseSettings', () => {
     expect(parse({ memoryLimitMB: -1 }).problems).toEqual(['assay.memoryLimitMB: expected a whole number from 0 to 1048576, got -1; using 8192']);
   });
 
+  it('passes assay.exactValuesLimit to the job (50 million by default)', () => {
+    expect(parse({}).settings.options.exactValuesLimit).toBe(50_000_000);
+    expect(parse({ exactValuesLimit: 1000 }).settings.options.exactValuesLimit).toBe(1000);
+    expect(parse({ exactValuesLimit: 0 }).problems).toEqual(['assay.exactValuesLimit: expected a whole number from 1 to 1000000000, got 0; using 50000000']);
+  });
+
   it('names unknown rule ids', () => {
     const { problems, settings } = parse({ 'rules.enabled': ['tukey-fence', 'gut-feeling'] });
     expect(problems[0]).toMatch(/^assay\.rules\.enabled: expected rule ids from: .* \(unknown: gut-feeling\), got \["tukey-fence","gut-feeling"\]; using /);
