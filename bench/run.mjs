@@ -4,10 +4,12 @@
 //     1 and 2 workers, and whether the two profiles agree,
 //   - the main thread's event-loop delay while worker threads profile the file (what an editor's
 //     extension host would feel),
+//   - one more run whose columns pass --exact-limit (rank sketches: bounded memory per column),
 //   - the same kind of summary through @duckdb/node-api when it is installed (optional), as a ratio.
 // Figures go to stdout as a table and to bench-output/ as JSON.
 //
 // Usage: node bench/run.mjs [--size 1GB|500MB|5MB] [--seed N] [--quick] [--workers 1,2] [--no-duckdb]
+//        [--sketch-limit N | --no-sketch]
 // `--quick` (a 2 MB file, seconds) proves the script works; CI runs it inside `npm test`.
 // Build first (`node esbuild.mjs`; `npm run bench` does both).
 import { spawn } from 'node:child_process';
@@ -35,7 +37,7 @@ function parseSize(text) {
 }
 
 function parseArgs(argv) {
-  const a = { size: 1e9, seed: 20240611, quick: false, workers: [1, 2], duckdb: true };
+  const a = { size: 1e9, seed: 20240611, quick: false, workers: [1, 2], duckdb: true, sketchLimit: undefined };
   for (let i = 0; i < argv.length; i++) {
     const w = argv[i];
     const value = () => {
@@ -48,9 +50,14 @@ function parseArgs(argv) {
     else if (w === '--quick') a.quick = true;
     else if (w === '--workers') a.workers = value().split(',').map(Number);
     else if (w === '--no-duckdb') a.duckdb = false;
-    else throw new Error(`${w}: unknown option (options: --size, --seed, --quick, --workers, --no-duckdb)`);
+    else if (w === '--sketch-limit') a.sketchLimit = Number(value());
+    else if (w === '--no-sketch') a.sketchLimit = 0;
+    else throw new Error(`${w}: unknown option (options: --size, --seed, --quick, --workers, --no-duckdb, --sketch-limit N, --no-sketch)`);
   }
   if (a.quick) a.size = 2e6;
+  // One more run whose columns pass --exact-limit (rank sketches, bounded memory per column):
+  // a million values per column on the full run, ten thousand on the quick one (to keep the path working).
+  a.sketchLimit ??= a.quick ? 10_000 : 1_000_000;
   return a;
 }
 
@@ -222,6 +229,23 @@ async function main() {
     runs.push(await runCli(file.path, w, size));
   }
   const agree = runs.length > 1 ? differences(runs[0].profile, runs[runs.length - 1].profile) : [];
+  let sketched = null;
+  if (args.sketchLimit > 0) {
+    if (!args.quick) await new Promise((r) => setTimeout(r, 15_000));
+    const w = Math.max(...args.workers);
+    sketched = await runCli(file.path, w, size, ['--exact-limit', String(args.sketchLimit)], `w${w}-sketch`);
+    const exact = runs[runs.length - 1].profile;
+    // What must not move: counts, means and extremes are exact either way; the sketch states its bound.
+    for (const [i, c] of sketched.profile.columns.entries()) {
+      const e = exact.columns[i];
+      if (c.count !== e.count || JSON.stringify(c.stats?.min) !== JSON.stringify(e.stats?.min) || JSON.stringify(c.stats?.max) !== JSON.stringify(e.stats?.max)) {
+        throw new Error(`the sketched run's ${c.name} differs from the exact one in count, min or max`);
+      }
+    }
+    const bounds = sketched.profile.columns.filter((c) => c.approximate).map((c) => c.approximate.relativeRankError);
+    sketched.sketchedColumns = bounds.length;
+    sketched.maxRelativeRankError = bounds.length ? Math.max(...bounds) : 0;
+  }
   const loop = await eventLoop(file.path, size, Math.max(...args.workers));
   const duck = args.duckdb ? await duckdb(file.path, size, Math.max(...args.workers)) : { skipped: 'not asked (--no-duckdb)' };
   const best = runs.reduce((a, b) => (b.mbPerSecond > a.mbPerSecond ? b : a));
@@ -230,6 +254,7 @@ async function main() {
   rows.push(['raw read (1 MiB chunks, count LF)', raw.seconds, raw.mbPerSecond, '', `${raw.lineBreaks} line breaks`]);
   rows.push([`first view (first ${FIRST_PASS_RECORDS} records)`, first.seconds, '', first.peakRssMB, `${first.profile.rows} rows, partial: ${first.profile.partial}`]);
   for (const r of runs) rows.push([`assay full profile, ${r.workers} worker${r.workers > 1 ? 's' : ''}`, r.seconds, r.mbPerSecond, r.peakRssMB, `${r.profile.rows} rows${r.note ? `; ${r.note}` : ''}`]);
+  if (sketched) rows.push([`assay, ${sketched.workers} workers, --exact-limit ${args.sketchLimit}`, sketched.seconds, sketched.mbPerSecond, sketched.peakRssMB, `${sketched.sketchedColumns} columns sketched, rank error at most ${(100 * sketched.maxRelativeRankError).toPrecision(2)}% of n`]);
   if (runs.length > 1) {
     const sp = runs[0].seconds / runs[runs.length - 1].seconds;
     rows.push([`speed-up ${runs[0].workers} -> ${runs[runs.length - 1].workers} workers`, '', '', '', `${sp.toFixed(2)}x`]);
@@ -248,6 +273,7 @@ async function main() {
       void profile;
       return r;
     }),
+    sketched: sketched && (({ profile, ...r }) => (void profile, { exactLimit: args.sketchLimit, ...r }))(sketched),
     differences: agree, eventLoop: loop, duckdb: duck,
   };
   const json = join(outDir, `bench-${args.quick ? 'quick' : label(size)}.json`);
