@@ -8,7 +8,7 @@ import type { BinChoice, ProfileOptions } from '../options';
 import { dagostinoPearson } from '../stats/dagostino-pearson';
 import { geometricMean } from '../stats/geometric-mean';
 import { medianAbsoluteDeviation } from '../stats/median-absolute-deviation';
-import { meanAndSd } from '../stats/mean-and-sd';
+import { compensatedSum } from '../stats/mean-and-sd';
 import { Moments } from '../stats/moments';
 import { quantileSorted } from '../stats/quantile';
 import { shapiroWilk } from '../stats/shapiro-wilk';
@@ -57,10 +57,10 @@ const ALWAYS_NUMBERS = ['sum', 'mean', 'sd', 'variance', 'sem', 'min', 'max', 'r
  */
 export function numericSummary(sorted: Float64Array, _rowValues: Float64Array, level: Level, options: ProfileOptions): NumericSummary {
   const n = sorted.length;
-  const m = Moments.of(sorted);
-  // Two passes for the mean and SD: one pass cannot meet NIST StRD's certified values on every set.
-  const ms = meanAndSd(sorted);
-  const sd = ms.sd ?? 0;
+  // Two passes for the mean and SD (meanAndSd's, to the bit): one pass cannot meet NIST StRD's
+  // certified values on every set; the higher moments take the same second pass.
+  const m = Moments.centred(sorted, compensatedSum(sorted));
+  const sd = m.sd ?? 0;
   const type = options.quantileType;
   const q1 = (quantileSorted(sorted, 0.25, type) ?? NaN);
   const median = (quantileSorted(sorted, 0.5, type) ?? NaN);
@@ -71,7 +71,7 @@ export function numericSummary(sorted: Float64Array, _rowValues: Float64Array, l
   const stats: NumericStats = {
     count: n,
     sum: m.total,
-    mean: ms.mean ?? m.mean,
+    mean: m.mean,
     sd,
     variance: sd * sd,
     sem: n > 1 ? sd / Math.sqrt(n) : 0,

@@ -1,4 +1,25 @@
 /**
+ * The first pass of `meanAndSd`: the non-NaN values counted and summed by Neumaier's (1974)
+ * compensated summation; the sum is `sum + compensation`.
+ *
+ * @example compensatedSum([1e16, 1, -1e16]) // { n: 3, sum: 0, compensation: 1 }
+ */
+export function compensatedSum(values: ArrayLike<number>): { n: number; sum: number; compensation: number } {
+  let n = 0;
+  let sum = 0;
+  let compensation = 0;
+  for (let i = 0; i < values.length; i++) {
+    const x = values[i] as number;
+    if (Number.isNaN(x)) continue;
+    n++;
+    const t = sum + x;
+    compensation += Math.abs(sum) >= Math.abs(x) ? sum - t + x : x - t + sum;
+    sum = t;
+  }
+  return { n, sum, compensation };
+}
+
+/**
  * Mean and sample standard deviation by two passes over the data, the corrected two-pass algorithm.
  *
  * Definition: mean x̄ = Σx / n (the sum compensated by Neumaier's method, Neumaier 1974);
@@ -16,17 +37,7 @@
  * @example meanAndSd([2, 4, 4, 4, 5, 5, 7, 9]) // { n: 8, mean: 5, sd: 2.138089935299395 }
  */
 export function meanAndSd(values: ArrayLike<number>): { n: number; mean: number | null; sd: number | null } {
-  let n = 0;
-  let sum = 0;
-  let compensation = 0;
-  for (let i = 0; i < values.length; i++) {
-    const x = values[i] as number;
-    if (Number.isNaN(x)) continue;
-    n++;
-    const t = sum + x;
-    compensation += Math.abs(sum) >= Math.abs(x) ? sum - t + x : x - t + sum;
-    sum = t;
-  }
+  const { n, sum, compensation } = compensatedSum(values);
   if (n === 0) return { n, mean: null, sd: null };
   const mean = (sum + compensation) / n;
   if (n < 2) return { n, mean, sd: null };

@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { sampleKurtosis, sampleSkewness, sampleVariance } from 'simple-statistics';
 import { describe, expect, it } from 'vitest';
+import { compensatedSum, meanAndSd } from '../../../../src/core/stats/mean-and-sd';
 import { Moments } from '../../../../src/core/stats/moments';
 import { jStat } from './jstat-oracle';
 import { CERTIFIED, strd } from './strd';
@@ -32,6 +33,41 @@ describe('Moments', () => {
         expect(rel(m.sd as number, c.sd), 'sd').toBeLessThanOrEqual(c.sdTol);
       });
     }
+  });
+
+  describe('Moments.centred (two passes about a given mean) meets the same NIST StRD certified values', () => {
+    for (const c of CERTIFIED) {
+      it(c.name, () => {
+        const data = strd(c.name);
+        const m = Moments.centred(data, compensatedSum(data));
+        // The SD is meanAndSd's, to the bit.
+        expect(m.sd).toBe(meanAndSd(data).sd);
+        expect(m.n).toBe(c.n);
+        expect(rel(m.mean, c.mean), 'mean').toBeLessThanOrEqual(c.meanTol);
+        expect(rel(m.sd as number, c.sd), 'sd').toBeLessThanOrEqual(c.sdTol);
+      });
+    }
+  });
+
+  it('Moments.centred agrees with simple-statistics on random data, whatever mean it is given (fast-check)', () => {
+    fc.assert(
+      fc.property(fc.array(fc.double({ min: -1e3, max: 1e3, noNaN: true }), { minLength: 4, maxLength: 60 }), fc.double({ min: -1, max: 1, noNaN: true }), (x, shift) => {
+        // A first pass whose mean is off by up to 1 still gives the sample's own moments (the δ corrections).
+        const first = compensatedSum(x);
+        const m = Moments.centred(x, { ...first, compensation: first.compensation + shift * x.length });
+        const v = sampleVariance(x);
+        if (!(v > 1e-6)) return;
+        expect(rel(m.variance as number, v)).toBeLessThan(1e-9);
+        expect(Math.abs((m.skewness as number) - sampleSkewness(x))).toBeLessThan(1e-7);
+        expect(Math.abs((m.kurtosis as number) - sampleKurtosis(x))).toBeLessThan(1e-7);
+        expect(m.min).toBe(Math.min(...x));
+        expect(m.max).toBe(Math.max(...x));
+      }),
+      { numRuns: 200 },
+    );
+    const doc = [2, 4, 4, 4, 5, 5, 7, 9];
+    expect(Moments.centred(doc, compensatedSum(doc)).sd).toBeCloseTo(2.138089935299395, 15);
+    expect(Moments.centred([NaN], compensatedSum([NaN])).n).toBe(0);
   });
 
   it('gives the Anscombe (1973) quartet summary: mean x = 9, var x = 11, mean y = 7.50', async () => {
