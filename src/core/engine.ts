@@ -30,7 +30,7 @@ export interface ProfileSession {
    * Where a value stands in a numeric or date column: how many values are below it and equal to it,
    * and its mid-rank percentile 100 (below + equal / 2) / n. Null for other columns.
    */
-  standing(column: string, value: number): { below: number; equal: number; n: number; percentile: number } | null;
+  standing(column: string, value: number): { below: number; equal: number; n: number; percentile: number; rankError?: number } | null;
 }
 
 export interface ProfileJob {

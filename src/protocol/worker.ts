@@ -15,6 +15,8 @@ export interface Standing {
   n: number;
   /** Mid-rank percentile 100 (below + equal / 2) / n. */
   percentile: number;
+  /** Present when the column is summarised by a rank sketch: below and equal are within this of the exact counts. */
+  rankError?: number;
 }
 
 /**
@@ -167,7 +169,8 @@ export function isHostToWorker(m: unknown): m is HostToWorker {
 }
 
 function isStanding(v: unknown): v is Standing {
-  return isRecord(v) && ['below', 'equal', 'n', 'percentile'].every((k) => typeof v[k] === 'number' && Number.isFinite(v[k]));
+  return isRecord(v) && ['below', 'equal', 'n', 'percentile'].every((k) => typeof v[k] === 'number' && Number.isFinite(v[k]))
+    && (v.rankError === undefined || (typeof v.rankError === 'number' && v.rankError >= 0 && Number.isFinite(v.rankError)));
 }
 
 const FAILURE_REASONS: readonly string[] = ['cancelled', 'error', 'no-profile'];

@@ -13,6 +13,8 @@ export interface ValueStanding {
   equal: number;
   n: number;
   percentile: number;
+  /** Set when the column is a rank sketch: the counts are within this of the exact ones. */
+  rankError?: number;
 }
 
 export interface HoverCell {
@@ -59,6 +61,9 @@ function isDate(s: ColumnProfile['stats']): s is DateStats {
 
 function standingText(s: ValueStanding, digits: number): string {
   const equal = s.equal > 0 ? `, ${s.equal} equal` : '';
+  if (s.rankError !== undefined) {
+    return `about percentile ${formatNumber(s.percentile, digits)} (from a rank sketch: about ${s.below} of ${s.n} values below${equal}, each count within ${s.rankError})`;
+  }
   return `percentile ${formatNumber(s.percentile, digits)} (mid-rank: ${s.below} of ${s.n} values below${equal})`;
 }
 
@@ -72,7 +77,9 @@ function numericLines(c: ColumnProfile, stats: NumericStats, written: string, x:
     if (stats.mad > 0) parts.push(`modified z-score ${f(modifiedZScore(x, stats.median, stats.mad))}`);
     if (parts.length > 0) out.push(`Value ${text(written.trim(), 60)}: ${parts.join(' · ')}`);
   }
-  out.push(`Column: median ${f(stats.median)} · IQR ${f(stats.iqr)} (Hyndman & Fan type ${stats.quantileType}) · mean ${f(stats.mean)} · SD ${f(stats.sd)} · n ${stats.count}`);
+  // Optional read: profiles written before the member existed lack it.
+  const method = c.approximate ? `rank sketch, within ${c.approximate.rankError} ranks` : `Hyndman & Fan type ${stats.quantileType}`;
+  out.push(`Column: median ${f(stats.median)} · IQR ${f(stats.iqr)} (${method}) · mean ${f(stats.mean)} · SD ${f(stats.sd)} · n ${stats.count}`);
   if (c.invalid > 0) out.push(`${c.invalid} ${c.invalid === 1 ? 'cell does' : 'cells do'} not read as ${c.type === 'integer' ? 'an integer' : 'a number'}.`);
   return out;
 }

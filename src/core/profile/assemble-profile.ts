@@ -10,7 +10,9 @@ import { declaredColumn } from './declared-schema';
 import { fieldTextAt } from './field-text';
 import type { JobState, ScanTotals } from './job';
 import { compareGroups } from './group-comparison';
-import { binValues } from './numeric-summary';
+import { binValues, sketchedNumericSummary } from './numeric-summary';
+import { weightBelow, type WeightedItems } from '../stats/rank-sketch';
+import type { ValueSketch } from './value-sketch';
 import { lowerBound } from '../stats/lower-bound';
 import type { ColumnProfile, Flag, FlagTotal, GroupComparison, LineEnding, Profile } from './types';
 
@@ -50,6 +52,8 @@ export function assembleProfile(
 
   const columns: ColumnProfile[] = [];
   const typed = new Map<string, { sorted: Float64Array; rowValues: Float64Array; numeric: boolean }>();
+  // Columns kept as rank sketches (past exactValuesLimit): re-binned and looked up from the sketch.
+  const sketched = new Map<string, { vs: ValueSketch; numeric: boolean; level: ColumnProfile['level']; integer: boolean; items: WeightedItems | null }>();
   const allPending: { column: ColumnProfile | null; flags: PendingFlag[]; totals: Map<RuleId, number> }[] = [];
   st.columns.forEach((acc, i) => {
     const name = st.names[i]!;
@@ -68,6 +72,10 @@ export function assembleProfile(
     }
     allPending.push({ column, flags: pending, totals });
     if (rowValues && sorted) typed.set(name, { sorted, rowValues, numeric: column.type === 'integer' || column.type === 'decimal' });
+    // Only a column assembled here: one assembled in another thread left its sketch there.
+    if (acc.valueSketch && column.approximate && column.stats && !preassembled?.has(i)) {
+      sketched.set(name, { vs: acc.valueSketch, numeric: column.type === 'integer' || column.type === 'decimal', level: column.level, integer: acc.counts.decimal === 0, items: null });
+    }
   });
 
   // Record-level findings.
@@ -162,10 +170,25 @@ export function assembleProfile(
 
   const session: ProfileSession = {
     rebin(column, bins, edges) {
+      const s = sketched.get(column);
+      if (s?.numeric) {
+        const r = sketchedNumericSummary(s.vs, s.level, { ...options, bins, edges }, s.integer);
+        return { histogram: r.histogram, grouped: r.grouped };
+      }
       const t = typed.get(column);
       return t?.numeric ? binValues(t.sorted, bins, edges) : null;
     },
     standing(column, value) {
+      const s = sketched.get(column);
+      if (s && !Number.isNaN(value)) {
+        const sketch = s.numeric ? s.vs.numbers : s.vs.instants;
+        const items = (s.items ??= sketch.sortedItems());
+        const n = sketch.n;
+        if (n === 0) return null;
+        const below = weightBelow(items, value);
+        const equal = weightBelow(items, value, true) - below;
+        return { below, equal, n, percentile: (100 * (below + equal / 2)) / n, rankError: sketch.rankError };
+      }
       const t = typed.get(column);
       if (!t || t.sorted.length === 0 || Number.isNaN(value)) return null;
       const below = lowerBound(t.sorted, value);

@@ -33,7 +33,7 @@ export function joinRangeStates(states: JobState[], elsewhere?: (ranges: readonl
   let merged: JobState | null = null;
   for (const [k, st] of states.entries()) {
     if (k > 0) st.notices = st.notices.filter((n) => n.code !== 'empty');
-    merged = merged ? mergeStates(merged, st, taken) : st;
+    merged = merged ? mergeStates(merged, st, taken, k === states.length - 1) : st;
   }
   return merged;
 }

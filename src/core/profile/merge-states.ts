@@ -2,12 +2,15 @@
 // over the whole text would have built: rows and lines shift by what came before, accumulators
 // concatenate, dictionaries and counts add, and records repeated across ranges become duplicates.
 import type { JobState } from './job';
+import { RecordKeySet } from './record-key-set';
 
 /**
  * Merges `b` (the range right after `a`) into `a`, and returns `a`. Columns in `elsewhere` are not
  * appended here: another thread joins them (assemble-elsewhere.ts), and `a` keeps only its own part.
+ * `last`: no range will be merged after `b`, so the duplicate-record keys are only looked up, and
+ * both key tables let go (the largest per-record structure; a joined one would need room for both).
  */
-export function mergeStates(a: JobState, b: JobState, elsewhere?: ReadonlySet<number>): JobState {
+export function mergeStates(a: JobState, b: JobState, elsewhere?: ReadonlySet<number>, last = false): JobState {
   if (a.columns.length !== b.columns.length) {
     throw new Error(`merge: ranges have ${a.columns.length} and ${b.columns.length} columns`);
   }
@@ -45,7 +48,11 @@ export function mergeStates(a: JobState, b: JobState, elsewhere?: ReadonlySet<nu
     ra.duplicates.push({ row: row + rowShift, first: earlier });
     if (ra.duplicates.length > 2 * cap) ra.duplicates = ra.duplicates.sort(byRow).slice(0, cap);
     if (firstOf.has(row)) firstOf.set(row, earlier);
-  });
+  }, !last);
+  if (last) {
+    ra.seen = new RecordKeySet();
+    rb.seen = new RecordKeySet();
+  }
   for (const d of rb.duplicates) ra.duplicates.push({ row: d.row + rowShift, first: firstOf.get(d.first) ?? d.first + rowShift });
   ra.duplicates = ra.duplicates.sort(byRow).slice(0, cap);
   ra.duplicateTotal += rb.duplicateTotal;

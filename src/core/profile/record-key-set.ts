@@ -104,11 +104,13 @@ export class RecordKeySet {
   /**
    * Adds every key of `other` (a later range, whose rows are shifted by `rowShift`); for a key this
    * set already has, calls `repeat(otherRow, firstRow)` instead. Visits `other` with an odd stride,
-   * as the iterator does, and makes room once: merging ranges of millions of records.
+   * as the iterator does, and makes room once: merging ranges of millions of records. With
+   * `keep` false the keys new to this set are not added (the last merge: no later range will ask,
+   * and a table for both ranges need not be made); the repeats found are the same.
    */
-  absorb(other: RecordKeySet, rowShift: number, repeat: (row: number, first: number) => void): void {
+  absorb(other: RecordKeySet, rowShift: number, repeat: (row: number, first: number) => void, keep = true): void {
     let cap = this.mask + 1;
-    while ((this.size + other.size) * 4 > cap * 3) cap *= 2;
+    while (keep && (this.size + other.size) * 4 > cap * 3) cap *= 2;
     if (cap !== this.mask + 1) this.rehash(cap);
     const o = other.slots;
     const omask = other.mask;
@@ -125,6 +127,7 @@ export class RecordKeySet {
         const at = slot * W;
         const r = s[at + 2]!;
         if (r === 0) {
+          if (!keep) break;
           s[at] = h;
           s[at + 1] = lo;
           s[at + 2] = row + rowShift;

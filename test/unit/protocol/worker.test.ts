@@ -42,6 +42,7 @@ const workerMessages: WorkerToHost[] = [
   { type: 'groups-result', id: 6, ...at, comparison: null },
   { type: 'standing-result', id: 8, ...at, column: 'x', standing: { below: 7, equal: 1, n: 8, percentile: 93.75 } },
   { type: 'standing-result', id: 8, ...at, column: 'x', standing: null },
+  { type: 'standing-result', id: 8, ...at, column: 'x', standing: { below: 700, equal: 2, n: 1000, percentile: 70.1, rankError: 12 } },
   { type: 'failed', id: 1, ...at, reason: 'cancelled', message: 'worker: the job was cancelled' },
   { type: 'failed', id: 1, ...at, reason: 'error', message: 'x' },
   { type: 'failed', id: 1, ...at, reason: 'no-profile', message: 'x' },
@@ -114,6 +115,7 @@ describe('protocol/worker guards', () => {
     ['a profiled index of plain arrays', { ...profiled(true), index: { offsets: [1], lines: [1] } }],
     ['a progress without totalBytes', { type: 'progress', id: 1, ...at, bytesRead: 1 }],
     ['a standing without its counts', { type: 'standing-result', id: 1, ...at, column: 'x', standing: { percentile: 50 } }],
+    ['a standing with a negative rank error', { type: 'standing-result', id: 1, ...at, column: 'x', standing: { below: 1, equal: 0, n: 2, percentile: 50, rankError: -1 } }],
   ])('worker → host refuses %s', (_what, m) => {
     expect(isWorkerToHost(m)).toBe(false);
   });

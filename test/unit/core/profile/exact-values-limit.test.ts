@@ -8,6 +8,7 @@ import { ascending, bisectLeft, bisectRight } from 'd3-array';
 import { max, mean, min, sampleStandardDeviation } from 'simple-statistics';
 import { describe, expect, it } from 'vitest';
 import { profileBytes } from '../../../../src/core/engine';
+import { cellHoverMarkdown } from '../../../../src/core/editor/cell-hover';
 import { columnSummary, groupedTable, summaryTable } from '../../../../src/core/markdown';
 import { resolveOptions } from '../../../../src/core/options';
 import { planDialect, RangeJob } from '../../../../src/core/profile/job';
@@ -97,6 +98,24 @@ describe('exactValuesLimit: a column past it is summarised by a rank sketch', ()
     expect(summary).toContain(x.approximate!.note);
     expect(groupedTable(x.grouped!, 'x')).toContain(`Counts from a rank sketch: each within ${2 * x.approximate!.rankError} of the exact count.`);
     expect(summaryTable(profile)).toMatch(/Medians, quartiles, IQR and MAD of "x", "day" come from a rank sketch/);
+  });
+
+  it('re-bins and places a value from the sketch, within its bound (the editor session)', () => {
+    const { profile, session } = profileBytes(bytes, options);
+    const e = col(profile, 'x').approximate!.rankError;
+    const r = session.rebin('x', { rule: 'sturges' }, 'exact')!;
+    expect(r.histogram!.rule).toBe('sturges');
+    expect(r.grouped!.approximateNote).toMatch(/rank sketch/);
+    expectWithinBound({ ...col(profile, 'x'), histogram: r.histogram });
+    for (const v of [sorted[0]!, sorted[1234]!, sorted[N / 2]!, 7.5, sorted[N - 1]!]) {
+      const s = session.standing('x', v)!;
+      expect(s.rankError).toBe(e);
+      expect(Math.abs(s.below - bisectLeft(sorted, v))).toBeLessThanOrEqual(e);
+      expect(Math.abs(s.below + s.equal - bisectRight(sorted, v))).toBeLessThanOrEqual(e);
+    }
+    const hover = cellHoverMarkdown({ column: col(profile, 'x'), value: '7.5', number: 7.5, missing: false, flags: [], recordFlags: [], standing: session.standing('x', 7.5), significantDigits: 4, links: null, partial: false });
+    expect(hover).toContain('about percentile');
+    expect(hover).toContain(`rank sketch, within ${e} ranks`);
   });
 
   it('keeps the bound when ranges are sketched apart and merged (2 and 4 ranges)', () => {

@@ -60,6 +60,14 @@ describe('RecordKeySet', () => {
         expect(new Map(a.s)).toEqual(expected);
         expect(a.s.size).toBe(expected.size);
         expect(repeats.sort((x, y) => x[0] - y[0])).toEqual(expectedRepeats.sort((x, y) => x[0] - y[0]));
+        // The last merge only looks up: the same repeats, and this set is left as it was.
+        const c = build(left);
+        const d = build(right);
+        const looked: [number, number][] = [];
+        c.s.absorb(d.s, shift, (row, first) => looked.push([row, first]), false);
+        expect(looked.sort((x, y) => x[0] - y[0])).toEqual(expectedRepeats);
+        expect(new Map(c.s)).toEqual(a.m);
+        expect(c.s.size).toBe(a.m.size);
       }),
       { numRuns: 30 },
     );
