@@ -42,7 +42,8 @@ export interface WeightedItems {
  * 2^h (of c sorted items below x, ⌈c/2⌉ or ⌊c/2⌋ survive at twice the weight). The sketch adds 2^h
  * to `rankError` at every compaction, so for every x the estimated rank is within `rankError` of
  * the exact one: a worst-case bound, not a probability. It grows as about n log₂(n / k) / k.
- * Count, min and max are exact.
+ * The count is exact; the extremes may be compacted away, so a caller that needs them keeps them
+ * (ValueSketch keeps moments beside its sketches).
  *
  * @example
  * const s = new RankSketch(64);
