@@ -8,7 +8,7 @@ import type { BinChoice, ProfileOptions } from '../options';
 import { dagostinoPearson } from '../stats/dagostino-pearson';
 import { geometricMean } from '../stats/geometric-mean';
 import { medianAbsoluteDeviation } from '../stats/median-absolute-deviation';
-import { compensatedSum } from '../stats/mean-and-sd';
+import { compensatedSum } from '../stats/compensated-sum';
 import { Moments } from '../stats/moments';
 import { quantileSorted } from '../stats/quantile';
 import { shapiroWilk } from '../stats/shapiro-wilk';

@@ -1,3 +1,5 @@
+import { sumOfPositive } from './compensated-sum';
+
 /**
  * Geometric mean (x₁ x₂ ... xₙ)^(1/n) of positive values, computed as exp(mean(ln x)) so that the
  * product cannot overflow or underflow.
@@ -14,24 +16,6 @@
  * @example geometricMean([1, 2, 3, 4, 5, 6, 7]) // ≈ 3.3800151591412964 (scipy docs)
  */
 export function geometricMean(values: ArrayLike<number>): number | null {
-  let n = 0;
-  let sum = 0;
-  let compensation = 0;
-  let last = NaN;
-  let l = NaN;
-  for (let i = 0; i < values.length; i++) {
-    const x = values[i] as number;
-    if (Number.isNaN(x)) continue;
-    if (!(x > 0)) return null;
-    // A repeat of the previous value (runs, in sorted input) reuses its logarithm: the same bits.
-    if (x !== last) {
-      last = x;
-      l = Math.log(x);
-    }
-    const t = sum + l;
-    compensation += Math.abs(sum) >= Math.abs(l) ? sum - t + l : l - t + sum;
-    sum = t;
-    n++;
-  }
-  return n === 0 ? null : Math.exp((sum + compensation) / n);
+  const s = sumOfPositive(values, Math.log);
+  return s === null || s.n === 0 ? null : Math.exp(s.total / s.n);
 }

@@ -1,3 +1,5 @@
+import { sumOfPositive } from './compensated-sum';
+
 /**
  * Harmonic mean n / Σ (1/x) of positive values.
  *
@@ -12,18 +14,6 @@
  * @example harmonicMean([1, 2, 3, 4, 5, 6, 7]) // ≈ 2.6997245179063363 (scipy docs)
  */
 export function harmonicMean(values: ArrayLike<number>): number | null {
-  let n = 0;
-  let sum = 0;
-  let compensation = 0;
-  for (let i = 0; i < values.length; i++) {
-    const x = values[i] as number;
-    if (Number.isNaN(x)) continue;
-    if (!(x > 0)) return null;
-    const r = 1 / x;
-    const t = sum + r;
-    compensation += Math.abs(sum) >= Math.abs(r) ? sum - t + r : r - t + sum;
-    sum = t;
-    n++;
-  }
-  return n === 0 ? null : n / (sum + compensation);
+  const s = sumOfPositive(values, (x) => 1 / x);
+  return s === null || s.n === 0 ? null : s.n / s.total;
 }

@@ -1,23 +1,4 @@
-/**
- * The first pass of `meanAndSd`: the non-NaN values counted and summed by Neumaier's (1974)
- * compensated summation; the sum is `sum + compensation`.
- *
- * @example compensatedSum([1e16, 1, -1e16]) // { n: 3, sum: 0, compensation: 1 }
- */
-export function compensatedSum(values: ArrayLike<number>): { n: number; sum: number; compensation: number } {
-  let n = 0;
-  let sum = 0;
-  let compensation = 0;
-  for (let i = 0; i < values.length; i++) {
-    const x = values[i] as number;
-    if (Number.isNaN(x)) continue;
-    n++;
-    const t = sum + x;
-    compensation += Math.abs(sum) >= Math.abs(x) ? sum - t + x : x - t + sum;
-    sum = t;
-  }
-  return { n, sum, compensation };
-}
+import { compensatedSum } from './compensated-sum';
 
 /**
  * Mean and sample standard deviation by two passes over the data, the corrected two-pass algorithm.

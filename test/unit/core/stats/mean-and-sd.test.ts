@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { compensatedSum, meanAndSd } from '../../../../src/core/stats/mean-and-sd';
+import { compensatedSum, sumOfPositive } from '../../../../src/core/stats/compensated-sum';
+import { meanAndSd } from '../../../../src/core/stats/mean-and-sd';
 import { CERTIFIED, strd } from './strd';
 
 const rel = (a: number, b: number): number => (a === b ? 0 : Math.abs(a - b) / Math.abs(b));
@@ -9,6 +10,8 @@ describe('meanAndSd', () => {
     expect(meanAndSd(Object.freeze([2, 4, 4, 4, 5, 5, 7, 9]))).toEqual({ n: 8, mean: 5, sd: 2.138089935299395 });
     // Neumaier's example of what plain summation loses: 1e16 + 1 − 1e16 is 0 in doubles, 1 compensated.
     expect(compensatedSum([1e16, 1, -1e16])).toEqual({ n: 3, sum: 0, compensation: 1 });
+    expect(sumOfPositive([1, 2, 2], Math.log)).toEqual({ n: 3, total: Math.log(4) });
+    expect(sumOfPositive([1, 0], Math.log)).toBeNull();
   });
 
   describe('meets the NIST StRD certified mean and SD at GNU GSL test tolerances (two pass)', () => {

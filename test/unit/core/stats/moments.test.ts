@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import { sampleKurtosis, sampleSkewness, sampleVariance } from 'simple-statistics';
 import { describe, expect, it } from 'vitest';
-import { compensatedSum, meanAndSd } from '../../../../src/core/stats/mean-and-sd';
+import { compensatedSum } from '../../../../src/core/stats/compensated-sum';
+import { meanAndSd } from '../../../../src/core/stats/mean-and-sd';
 import { Moments } from '../../../../src/core/stats/moments';
 import { jStat } from './jstat-oracle';
 import { CERTIFIED, strd } from './strd';
