@@ -3,7 +3,7 @@
 // fit and which are invalid, without keeping the cells' text.
 import { checkCalendar, daysFromCivil, parseDate } from './parse-date';
 import { parseNumber } from './parse-number';
-import { NUM_DECIMAL, NUM_NONE, NUM_PLAIN_INTEGER, parseNumberBytes } from './parse-number-bytes';
+import { NUM_DECIMAL, NUM_NONE, NUM_PLAIN_INTEGER, parseNumberBytes, SHAPE_IRREGULAR } from './parse-number-bytes';
 
 export const KIND_ABSENT = 0; // the record had no such field (short ragged row)
 export const KIND_INTEGER = 1;
@@ -28,6 +28,11 @@ export interface CellReading {
   kind: number;
   /** Numeric value, date/time in ms since the epoch, packed slash date, or 1/0 for booleans; NaN otherwise. */
   value: number;
+  /**
+   * How a number cell is written (see SHAPE_DIGITS in parse-number-bytes.ts); SHAPE_IRREGULAR for
+   * any cell `classifyBytes` did not read through the fast path. Read only for number kinds.
+   */
+  shape: number;
 }
 
 const DAY_MS = 86_400_000;
@@ -60,7 +65,7 @@ export class CellClassifier {
   /** 1 for each byte that begins a token: most cells (numbers, words) skip the token comparisons at once. */
   private readonly tokenFirst = new Uint8Array(256);
 
-  constructor(missingTokens: readonly string[], private readonly decimalSeparator: '.' | ',') {
+  constructor(missingTokens: readonly string[], readonly decimalSeparator: '.' | ',') {
     this.tokens = new Map();
     missingTokens.forEach((t, i) => {
       if (!this.tokens.has(t)) this.tokens.set(t, Math.min(i, MAX_TOKENS - 1));
@@ -84,6 +89,7 @@ export class CellClassifier {
    */
   classifyBytes(bytes: Uint8Array, start: number, end: number, out: CellReading): boolean {
     const n = end - start;
+    out.shape = SHAPE_IRREGULAR;
     if (n === 0) {
       if (this.emptyToken >= 0) {
         out.kind = KIND_MISSING + this.emptyToken;

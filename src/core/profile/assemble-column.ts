@@ -83,6 +83,9 @@ export function keepsValues(options: ProfileOptions): boolean {
 
 export function assembleColumn(acc: ColumnAccumulator, name: string, index: number, ctx: ColumnContext): AssembledColumn {
   const { options } = ctx;
+  // A column whose numbers were counted by value is counted now (see settleByValue): into the
+  // dictionary, or, past its distinct cap, from its sorted values.
+  const byValue = acc.settleByValue();
   const rows = acc.rows;
   const kinds = acc.kinds.view();
   const raw = acc.values ? acc.values.view() : null;
@@ -158,7 +161,8 @@ export function assembleColumn(acc: ColumnAccumulator, name: string, index: numb
   const count = rows - acc.missing;
   const entries: Counted[] = [];
   let e = 0;
-  for (const value of acc.categories.keys()) entries.push({ value, count: acc.categoryCounts[e++] ?? 0 });
+  if (byValue) entries.push(...byValue.top);
+  else for (const value of acc.categories.keys()) entries.push({ value, count: acc.categoryCounts[e++] ?? 0 });
 
   // Distinct values: exact from the typed values where the column is numeric (the dictionary may
   // be capped), from the dictionary otherwise, estimated beyond the cap.
@@ -166,6 +170,7 @@ export function assembleColumn(acc: ColumnAccumulator, name: string, index: numb
   // Category code per row, read once for the sort below and the text rules.
   const codes = acc.codes ? acc.codes.view() : null;
   if (rowValues && codes) sorted = sortedByCode(rowValues, codes, acc.distinct);
+  if (byValue && rowValues === raw) sorted = byValue.sorted;
   if (rowValues && !sorted) {
     let n = 0;
     for (let r = 0; r < rows; r++) if (!Number.isNaN(rowValues[r]!)) n++;
@@ -179,7 +184,8 @@ export function assembleColumn(acc: ColumnAccumulator, name: string, index: numb
   }
   let distinct: number;
   let distinctExact = true;
-  if (acc.capped) {
+  if (byValue) distinct = byValue.distinct;
+  else if (acc.capped) {
     // The estimate's error (about 0.8%) can carry it past the cells there are: never more distinct values than cells.
     distinct = Math.min(count, Math.max(acc.categories.size, acc.hll.estimate()));
     distinctExact = false;
@@ -227,8 +233,9 @@ export function assembleColumn(acc: ColumnAccumulator, name: string, index: numb
     frequencies: firstSorted(entries, options.topN, byCountThenValue),
     frequencyError: acc.capped ? acc.frequencyError : null,
     approximate: null,
-    frequencyTable: discrete && !acc.capped ? frequencyTable(entries, options.topN, order, count) : null,
-    sortedDistinct: sortedDistinct(entries, numeric, options.maxSortedDistinct, acc.capped, order),
+    // Past the cap `entries` holds the most frequent values only.
+    frequencyTable: discrete && !acc.capped && !byValue ? frequencyTable(entries, options.topN, order, count) : null,
+    sortedDistinct: sortedDistinct(entries, numeric, options.maxSortedDistinct, acc.capped || byValue !== null, order),
     shape: null,
     flags: [],
     flagTotals: [],

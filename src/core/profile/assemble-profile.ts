@@ -201,6 +201,7 @@ export function assembleProfile(
       const t = typed.get(numeric);
       const i = st.names.indexOf(by);
       const acc = i >= 0 ? st.columns[i] : undefined;
+      acc?.settleByValue();
       if (!t?.numeric || !acc || !acc.codes || numeric === by) return null;
       return compareGroups(numeric, by, t.rowValues, acc.codes.view(), [...acc.categories.keys()], options.quantileType);
     },

@@ -9,8 +9,11 @@ import {
 } from '../infer/classify-cell';
 import type { KindCounts } from '../infer/infer-type';
 import { ByteDictionary, type DictionaryParts } from './byte-dictionary';
+import { SHAPE_DIGITS, SHAPE_IRREGULAR, SHAPE_PADDED, SHAPE_TINY } from '../infer/parse-number-bytes';
+import { radixSortFloat64 } from '../stats/radix-sort';
 import { GrowableCodes } from './growable-codes';
-import { hashBytes, HyperLogLog } from './hyper-log-log';
+import { hashBytes, hashString, HyperLogLog } from './hyper-log-log';
+import { countRuns, topRuns, ValueCodes } from './number-counts';
 import { sketchCapacity, ValueSketch, type ValueSketchParts } from './value-sketch';
 
 /**
@@ -76,11 +79,16 @@ export interface AccumulatorLimits {
   heavyCounters: number;
   /** Typed values kept exactly per column; past it the column keeps a sketch (see ValueSketch). */
   exactValues?: number;
+  /** Whether number cells may be counted by value (see `ColumnAccumulator.byValue`); default true. */
+  byValue?: boolean;
 }
 
 /** The limits the options give: at least 1024 counters past the cap, and twice the frequencies shown. */
-export function accumulatorLimits(options: { maxDistinct: number; topN: number; exactValuesLimit?: number }): AccumulatorLimits {
-  return { maxDistinct: options.maxDistinct, heavyCounters: Math.min(options.maxDistinct, Math.max(1024, 2 * options.topN)), exactValues: options.exactValuesLimit ?? Infinity };
+export function accumulatorLimits(options: { maxDistinct: number; topN: number; exactValuesLimit?: number; countByValue?: boolean }): AccumulatorLimits {
+  return {
+    maxDistinct: options.maxDistinct, heavyCounters: Math.min(options.maxDistinct, Math.max(1024, 2 * options.topN)),
+    exactValues: options.exactValuesLimit ?? Infinity, byValue: options.countByValue ?? true,
+  };
 }
 
 /**
@@ -115,9 +123,32 @@ export interface AccumulatorParts {
   valueCount: number;
   /** Set once the column passed the exact-values limit (then `values` is null). */
   valueSketch: ValueSketchParts | null;
+  /** Whether number cells are counted by value, and their form (see `ColumnAccumulator.byValue`). */
+  form: [byValue: boolean, fixedDigits: number, shortest: boolean, lastShape: number];
+}
+
+/**
+ * What the sorted values of a column counted by value give when it has more distinct values than
+ * the dictionary keeps: the exact distinct count and the most frequent values with exact counts.
+ */
+export interface CountedByValue {
+  distinct: number;
+  /** The `heavyCounters` most frequent values as written, most frequent first (smaller values first among equal counts). */
+  top: { value: string; count: number }[];
+  /** The typed values sorted ascending (every number cell of the column). */
+  sorted: Float64Array;
 }
 
 const encoder = new TextEncoder();
+/** Bytes of the text of a number counted by value (ASCII: digits, sign, point or comma). */
+let formBytes = new Uint8Array(64);
+
+/** Writes ASCII `text` into `formBytes`; returns its length. */
+function asciiInto(text: string): number {
+  if (text.length > formBytes.length) formBytes = new Uint8Array(2 * text.length);
+  for (let i = 0; i < text.length; i++) formBytes[i] = text.charCodeAt(i);
+  return text.length;
+}
 const DAY_MS = 86_400_000;
 /** Values around the first one that the dense cache covers: 32 KiB of codes, small enough for L1/L2. */
 const DENSE = 8192;
@@ -137,8 +168,25 @@ export class ColumnAccumulator {
    * rank error (the extreme-value rules, which list rows, are then skipped for the column).
    */
   valueSketch: ValueSketch | null = null;
-  /** Category code per row (-1 for missing); dropped when the column has too many distinct values. */
-  codes: GrowableCodes | null = new GrowableCodes();
+  /**
+   * Category code per row (-1 for missing); dropped when the column has too many distinct values.
+   * Null while the column is counted by value (see `byValue`).
+   */
+  codes: GrowableCodes | null = null;
+  /**
+   * True while every cell is a number written in one form that follows from its value (all as
+   * `String(value)`, or all with the same number of fraction digits: see SHAPE_DIGITS), or missing.
+   * Such cells are then not looked up in the dictionary as they arrive: a value stands for one
+   * text, so `settleByValue` counts them afterwards from the values. The first cell of any other
+   * kind or form ends it (`leaveByValue`), and the column is then counted as if it never had been.
+   */
+  byValue = true;
+  /** Fraction digits of every number cell so far: -1 before the first, -2 once they differ. */
+  private fixedDigits = -1;
+  /** Whether every number cell so far is written as String(value). */
+  private shortest = true;
+  /** The shape last found to keep the form: the usual next cell repeats it, and needs no check. */
+  private lastShape = -1;
   /** Count per category code (codes number the distinct values in order of first appearance). */
   categoryCounts: number[] = [];
   /** The distinct values keyed by their bytes; each entry's value is its category code. */
@@ -175,7 +223,7 @@ export class ColumnAccumulator {
   missing = 0;
   absent = 0;
   spaced = 0;
-  private readonly reading: CellReading = { kind: 0, value: NaN };
+  private readonly reading: CellReading = { kind: 0, value: NaN, shape: 0 };
   /**
    * Category codes by value for canonically written integers or dates (one kind per column) near
    * the first one: small-range columns skip the hash table. A cache only: -1 means "ask the dictionary".
@@ -184,7 +232,12 @@ export class ColumnAccumulator {
   private denseKind = 0;
   private denseBase = 0;
 
-  constructor(readonly classifier: CellClassifier, readonly limits: AccumulatorLimits) {}
+  constructor(readonly classifier: CellClassifier, readonly limits: AccumulatorLimits) {
+    if (limits.byValue === false) {
+      this.byValue = false;
+      this.codes = new GrowableCodes();
+    }
+  }
 
   /**
    * Bytes this accumulator holds, plus what assembling its column will add (a sorted copy of the
@@ -274,10 +327,155 @@ export class ColumnAccumulator {
     if (value === value) {
       if (values !== null) {
         values.push(value);
-        if (++this.valueCount > this.exactValues) this.startSketch();
+        if (++this.valueCount > this.exactValues) this.startSketch(row);
       } else if (this.valueSketch !== null) this.valueSketch.add(kind, value);
       else this.startValues(value);
     } else if (values !== null) values.push(NaN);
+    if (this.byValue) {
+      if ((kind === KIND_INTEGER || kind === KIND_DECIMAL) && rawKind < KIND_SPACED && (r.shape === this.lastShape || this.keepsForm(r.shape))) return;
+      this.leaveByValue(row);
+    }
+    this.countCode(bytes, start, end, hash, canonical, kind, value, row);
+  }
+
+  /**
+   * Whether a number cell of this shape keeps the column's form (and takes it into the form).
+   * Not when it is irregular, or when it is neither written as String(value) like all before it
+   * nor with their count of fraction digits.
+   */
+  private keepsForm(shape: number): boolean {
+    if ((shape & SHAPE_IRREGULAR) !== 0) return false;
+    const digits = shape & SHAPE_DIGITS;
+    const shortest = this.shortest && (shape & (SHAPE_PADDED | SHAPE_TINY)) === 0;
+    const fixed = this.fixedDigits === -1 || this.fixedDigits === digits ? digits : -2;
+    if (!shortest && fixed < 0) return false;
+    this.shortest = shortest;
+    this.fixedDigits = fixed;
+    this.lastShape = shape;
+    return true;
+  }
+
+  /** The text of a number cell counted by value: its value in the column's form. */
+  private formText(v: number): string {
+    const t = this.fixedDigits >= 0 ? v.toFixed(this.fixedDigits) : String(v);
+    return this.classifier.decimalSeparator === ',' ? t.replace('.', ',') : t;
+  }
+
+  /**
+   * Ends counting by value: rows before `upTo` (number cells counted by value, or missing) are
+   * counted into the dictionary in row order, with their texts written out from their values, as
+   * they would have been as they arrived. Cost: one formatting and one lookup per number cell.
+   */
+  private leaveByValue(upTo: number): void {
+    if (!this.byValue) return;
+    this.byValue = false;
+    this.codes = new GrowableCodes();
+    this.codes.reserve(upTo);
+    const kinds = this.kinds.data;
+    const values = this.values?.data;
+    for (let r = 0; r < upTo; r++) {
+      const kind = kinds[r]! & KIND_MASK;
+      if (kind === KIND_ABSENT || kind >= KIND_MISSING || !values) {
+        this.codes?.push(-1);
+        continue;
+      }
+      const v = values[r]!;
+      const n = asciiInto(this.formText(v));
+      this.countCode(formBytes, 0, n, hashBytes(formBytes, 0, n), kind === KIND_INTEGER, kind, v, r);
+    }
+  }
+
+  /**
+   * The two forms of one column merged (ranges of one file): false when together they keep
+   * neither (then both must leave counting by value).
+   */
+  private mergeForm(other: ColumnAccumulator): boolean {
+    const shortest = this.shortest && other.shortest;
+    const a = this.fixedDigits;
+    const b = other.fixedDigits;
+    const fixed = a === -1 ? b : b === -1 ? a : a === b ? a : -2;
+    if (!shortest && fixed < 0) return false;
+    this.shortest = shortest;
+    this.fixedDigits = fixed;
+    this.lastShape = -1;
+    return true;
+  }
+
+  /**
+   * Settles a column counted by value, once its rows are all in. With at most `maxDistinct`
+   * distinct values it is counted into the dictionary in row order (codes by first appearance,
+   * each value's text written once), and returns null: the column is then exactly as if each cell
+   * had been looked up as it arrived. With more, it stays as it is and returns the exact distinct
+   * count and the most frequent values from the sorted values (where counting by text would
+   * have switched to an estimate and to bounded counters). Returns null too for a column not
+   * counted by value.
+   */
+  settleByValue(): CountedByValue | null {
+    if (!this.byValue) return null;
+    const rows = this.kinds.length;
+    const kinds = this.kinds.data;
+    const values = this.values?.data;
+    const seen = new ValueCodes();
+    const codes = new Int32Array(rows);
+    const max = this.limits.maxDistinct;
+    let over = false;
+    for (let r = 0; r < rows; r++) {
+      const kind = kinds[r]! & KIND_MASK;
+      if (kind === KIND_ABSENT || kind >= KIND_MISSING || !values) {
+        codes[r] = -1;
+        continue;
+      }
+      const v = values[r]!;
+      let c = seen.get(v);
+      if (c < 0) {
+        if (seen.size >= max) {
+          over = true;
+          break;
+        }
+        c = seen.size;
+        seen.add(v, c);
+      }
+      codes[r] = c;
+    }
+    if (over) return this.countedBySort();
+    // Codes are by first appearance, as the dictionary would have given them.
+    const texts: string[] = new Array<string>(seen.size);
+    for (let r = 0; r < rows; r++) {
+      const c = codes[r]!;
+      if (c >= 0 && texts[c] === undefined) texts[c] = this.formText(values![r]!);
+    }
+    this.byValue = false;
+    for (const t of texts) {
+      const n = asciiInto(t);
+      this.addValue(formBytes, 0, n, hashString(t));
+    }
+    const counts = this.categoryCounts;
+    const out = new GrowableCodes();
+    out.reserve(rows);
+    for (let r = 0; r < rows; r++) {
+      const c = codes[r]!;
+      if (c >= 0) counts[c]! += 1;
+      out.push(c);
+    }
+    this.codes = out;
+    return null;
+  }
+
+  /** See `settleByValue`: the counts of a column with more distinct values than are kept. */
+  private countedBySort(): CountedByValue {
+    const v = this.values!.view();
+    let n = 0;
+    for (let r = 0; r < v.length; r++) if (v[r] === v[r]) n++;
+    const sorted = new Float64Array(n);
+    n = 0;
+    for (let r = 0; r < v.length; r++) if (v[r] === v[r]) sorted[n++] = v[r]!;
+    radixSortFloat64(sorted);
+    const top = topRuns(sorted, this.limits.heavyCounters).map((x) => ({ value: this.formText(x.value), count: x.count }));
+    return { distinct: countRuns(sorted), top, sorted };
+  }
+
+  /** Counts one cell's text (its bytes, their hash): the distinct-value estimate, the category code, the count. */
+  private countCode(bytes: Uint8Array, start: number, end: number, hash: number, canonical: boolean, kind: number, value: number, row: number): void {
     if (this.hllFilled) this.sketch!.addHash(hash);
     let code: number;
     const dense = this.dense;
@@ -335,16 +533,21 @@ export class ColumnAccumulator {
     values.length = row + 1;
     this.values = values;
     this.valueCount = 1;
-    if (this.valueCount > this.exactValues) this.startSketch();
+    if (this.valueCount > this.exactValues) this.startSketch(row);
   }
 
   private get exactValues(): number {
     return this.limits.exactValues ?? Infinity;
   }
 
-  /** Moves the values kept so far into a sketch, in row order, and lets the row-indexed array go. */
-  startSketch(): void {
+  /**
+   * Moves the values kept so far into a sketch, in row order, and lets the row-indexed array go.
+   * A column counted by value is first counted by text (rows before `upTo`: the cell being added,
+   * if any, is counted by its caller).
+   */
+  startSketch(upTo = this.kinds.length): void {
     if (this.valueSketch !== null) return;
+    this.leaveByValue(upTo);
     const sketch = new ValueSketch(sketchCapacity(this.exactValues));
     const values = this.values;
     if (values !== null) {
@@ -524,6 +727,7 @@ export class ColumnAccumulator {
       missing: this.missing, absent: this.absent, spaced: this.spaced,
       dense: this.dense, denseKind: this.denseKind, denseBase: this.denseBase,
       valueCount: this.valueCount, valueSketch: this.valueSketch ? this.valueSketch.toParts() : null,
+      form: [this.byValue, this.fixedDigits, this.shortest, this.lastShape],
     };
   }
 
@@ -537,8 +741,10 @@ export class ColumnAccumulator {
       a.values.data = p.values;
       a.values.length = p.rows;
     }
-    if (p.codes) a.codes!.adopt(p.codes, p.rows);
-    else a.codes = null;
+    if (p.codes) {
+      a.codes = new GrowableCodes();
+      a.codes.adopt(p.codes, p.rows);
+    } else a.codes = null;
     a.distinct = p.distinct;
     for (const [t, c] of p.wideTexts) a.wideTexts.set(t, c);
     for (const n of p.categoryCounts) a.categoryCounts.push(n);
@@ -558,6 +764,7 @@ export class ColumnAccumulator {
     a.denseBase = p.denseBase;
     a.valueCount = p.valueCount;
     a.valueSketch = p.valueSketch ? ValueSketch.fromParts(p.valueSketch) : null;
+    [a.byValue, a.fixedDigits, a.shortest, a.lastShape] = p.form;
     return a;
   }
 
@@ -567,6 +774,11 @@ export class ColumnAccumulator {
    * file needs little more memory than the merged result.
    */
   append(other: ColumnAccumulator): void {
+    // Counted by value together only when both are and their forms agree; else both by text.
+    if ((this.byValue || other.byValue) && !(this.byValue && other.byValue && this.mergeForm(other))) {
+      this.leaveByValue(this.kinds.length);
+      other.leaveByValue(other.kinds.length);
+    }
     const base = this.rows;
     const otherRows = other.rows;
     // Past the limit together, both sides keep sketches (made from their rows before these go).

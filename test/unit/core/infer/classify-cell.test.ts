@@ -26,8 +26,8 @@ describe('CellClassifier.classifyBytes', () => {
       const c = new CellClassifier(TOKENS, sep);
       fc.assert(
         fc.property(cell, (text) => {
-          const want: CellReading = { kind: -1, value: -1 };
-          const got: CellReading = { kind: -1, value: -1 };
+          const want: CellReading = { kind: -1, value: -1, shape: 0 };
+          const got: CellReading = { kind: -1, value: -1, shape: 0 };
           c.classify(text, want);
           const b = enc.encode(`|${text}|`);
           const canonical = c.classifyBytes(b, 1, b.length - 1, got);

@@ -25,6 +25,8 @@ function columnCounts(bytes: Uint8Array, delimiter: string, quote: string, chunk
   for (let at = 0; at < bytes.length; at += chunk) job.push(bytes.subarray(at, at + chunk));
   const st = job.end();
   return st.columns.map((c) => {
+    // A column of numbers only is counted by value until it is settled (as assembly does).
+    c.settleByValue();
     const m = new Map<string, number>();
     for (const [value, code] of c.categories) m.set(value, (m.get(value) ?? 0) + c.categoryCounts[code]!);
     return m;
@@ -67,9 +69,24 @@ describe('the dense cache of a column that reaches its cap', () => {
   // it was dropped). Expected: one row per cell, every cell counted once (common practice).
   it('counts the cell that passed the cap', () => {
     const acc = new ColumnAccumulator(new CellClassifier([''], '.'), { maxDistinct: 1100, heavyCounters: 1024 });
+    // A text cell first: the column is then counted by text as its cells arrive (not by value).
+    acc.add('x');
     for (let v = 0; v <= 1100; v++) acc.add(String(v));
-    expect(acc.rows).toBe(1101);
+    expect(acc.byValue).toBe(false);
+    expect(acc.rows).toBe(1102);
     expect(acc.capped).toBe(true);
     expect(acc.counts.integer).toBe(1101);
+  });
+
+  it('counts the same numbers by value, exactly past the cap', () => {
+    // Expected: 1101 distinct whole numbers, each once (plain counting; common practice).
+    const acc = new ColumnAccumulator(new CellClassifier([''], '.'), { maxDistinct: 1100, heavyCounters: 1024 });
+    for (let v = 0; v <= 1100; v++) acc.add(String(v));
+    expect(acc.byValue).toBe(true);
+    const settled = acc.settleByValue();
+    expect(settled?.distinct).toBe(1101);
+    expect(settled?.top.length).toBe(1024);
+    expect(settled?.top.slice(0, 3)).toEqual([{ value: '0', count: 1 }, { value: '1', count: 1 }, { value: '2', count: 1 }]);
+    expect(acc.capped).toBe(false);
   });
 });
