@@ -363,11 +363,15 @@ export class ColumnAccumulator {
 
   /**
    * Ends counting by value: rows before `upTo` (number cells counted by value, or missing) are
-   * counted into the dictionary in row order, with their texts written out from their values, as
-   * they would have been as they arrived. Cost: one formatting and one lookup per number cell.
+   * counted into the dictionary as they would have been as they arrived: from their values under
+   * the cap (settleCodes), else in row order with each text written out from its value (past the
+   * cap the bounded counters depend on the order). Cost past the cap: one formatting and one
+   * look-up per number cell.
    */
   private leaveByValue(upTo: number): void {
     if (!this.byValue) return;
+    // Under the cap the values count faster than their texts could be looked up one by one.
+    if (this.settleCodes(upTo)) return;
     this.byValue = false;
     this.codes = new GrowableCodes();
     this.codes.reserve(upTo);
@@ -412,7 +416,16 @@ export class ColumnAccumulator {
    */
   settleByValue(): CountedByValue | null {
     if (!this.byValue) return null;
-    const rows = this.kinds.length;
+    return this.settleCodes(this.kinds.length) ? null : this.countedBySort();
+  }
+
+  /**
+   * Counts rows before `upTo` into the dictionary from their values, as `settleByValue` does, when
+   * they hold at most `maxDistinct` distinct values (true); else changes nothing (false).
+   * Cost: one table look-up per row and one formatting per distinct value.
+   */
+  private settleCodes(upTo: number): boolean {
+    const rows = upTo;
     const kinds = this.kinds.data;
     const values = this.values?.data;
     const seen = new ValueCodes();
@@ -437,7 +450,7 @@ export class ColumnAccumulator {
       }
       codes[r] = c;
     }
-    if (over) return this.countedBySort();
+    if (over) return false;
     // Codes are by first appearance, as the dictionary would have given them.
     const texts: string[] = new Array<string>(seen.size);
     for (let r = 0; r < rows; r++) {
@@ -458,7 +471,7 @@ export class ColumnAccumulator {
       out.push(c);
     }
     this.codes = out;
-    return null;
+    return true;
   }
 
   /** See `settleByValue`: the counts of a column with more distinct values than are kept. */

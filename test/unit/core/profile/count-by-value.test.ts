@@ -60,6 +60,15 @@ describe('counting number columns by value', () => {
     expect([b.distinct, b.distinctExact, b.sortedDistinct]).toEqual([41, true, null]);
     const a = profileBytes(over, resolveOptions({ maxDistinct: 40, countByValue: false })).profile.columns[0]!;
     expect(a.distinctExact).toBe(false);
+    // Past the cap and then a text cell: as counted by text from the start, bounded counters and
+    // all (split the same way: past the cap those depend on the split, within their stated bound).
+    for (const parts of [1, 2]) {
+      const late = csv([...rows, ['40.0', '1', '1'], ...rows, ['x', '1', '1'], ...rows]);
+      const t = profileInRanges(late, resolveOptions({ maxDistinct: 40, countByValue: false }), parts, 16, 64).profile;
+      const v = profileInRanges(late, resolveOptions({ maxDistinct: 40 }), parts, 16, 64);
+      expect(v.ranges).toBe(parts);
+      expect(JSON.stringify(v.profile.columns[0])).toBe(JSON.stringify(t.columns[0]));
+    }
   });
 
   it('counts exactly past the cap: distinct values and the most frequent ones (d3-array rollup, Set)', () => {
