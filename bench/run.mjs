@@ -5,6 +5,8 @@
 //   - the main thread's event-loop delay while worker threads profile the file (what an editor's
 //     extension host would feel),
 //   - one more run whose columns pass --exact-limit (rank sketches: bounded memory per column),
+//   - a baseline run with --count-by-text (every number looked up by its text as it is read, as
+//     before numbers were counted by value), as a ratio; its profile must be the same under the cap,
 //   - the same kind of summary through @duckdb/node-api when it is installed (optional), as a ratio.
 // Figures go to stdout as a table and to bench-output/ as JSON.
 //
@@ -246,6 +248,13 @@ async function main() {
     sketched.sketchedColumns = bounds.length;
     sketched.maxRelativeRankError = bounds.length ? Math.max(...bounds) : 0;
   }
+  // The baseline: the same profile with every cell counted by its text as it arrives.
+  if (!args.quick) await new Promise((r) => setTimeout(r, 15_000));
+  const wMax = Math.max(...args.workers);
+  const byText = await runCli(file.path, wMax, size, ['--count-by-text'], `w${wMax}-by-text`);
+  const sameRun = runs.find((r) => r.workers === wMax);
+  // Past the distinct cap counting by text estimates where counting by value is exact: only there may they differ.
+  const byTextDiffers = differences(byText.profile, sameRun.profile).filter((d) => !d.endsWith('(beyond the distinct cap)'));
   const loop = await eventLoop(file.path, size, Math.max(...args.workers));
   const duck = args.duckdb ? await duckdb(file.path, size, Math.max(...args.workers)) : { skipped: 'not asked (--no-duckdb)' };
   const best = runs.reduce((a, b) => (b.mbPerSecond > a.mbPerSecond ? b : a));
@@ -255,6 +264,7 @@ async function main() {
   rows.push([`first view (first ${FIRST_PASS_RECORDS} records)`, first.seconds, '', first.peakRssMB, `${first.profile.rows} rows, partial: ${first.profile.partial}`]);
   for (const r of runs) rows.push([`assay full profile, ${r.workers} worker${r.workers > 1 ? 's' : ''}`, r.seconds, r.mbPerSecond, r.peakRssMB, `${r.profile.rows} rows${r.note ? `; ${r.note}` : ''}`]);
   if (sketched) rows.push([`assay, ${sketched.workers} workers, --exact-limit ${args.sketchLimit}`, sketched.seconds, sketched.mbPerSecond, sketched.peakRssMB, `${sketched.sketchedColumns} columns sketched, rank error at most ${(100 * sketched.maxRelativeRankError).toPrecision(2)}% of n`]);
+  rows.push([`assay, ${byText.workers} workers, --count-by-text (baseline)`, byText.seconds, byText.mbPerSecond, byText.peakRssMB, `counting numbers by value: ${(byText.seconds / sameRun.seconds).toFixed(2)}x faster`]);
   if (runs.length > 1) {
     const sp = runs[0].seconds / runs[runs.length - 1].seconds;
     rows.push([`speed-up ${runs[0].workers} -> ${runs[runs.length - 1].workers} workers`, '', '', '', `${sp.toFixed(2)}x`]);
@@ -274,6 +284,7 @@ async function main() {
       return r;
     }),
     sketched: sketched && (({ profile, ...r }) => (void profile, { exactLimit: args.sketchLimit, ...r }))(sketched),
+    byText: (({ profile, ...r }) => (void profile, { ...r, speedUp: +(byText.seconds / sameRun.seconds).toFixed(3), differences: byTextDiffers }))(byText),
     differences: agree, eventLoop: loop, duckdb: duck,
   };
   const json = join(outDir, `bench-${args.quick ? 'quick' : label(size)}.json`);
@@ -283,6 +294,10 @@ async function main() {
   // it proves the parallel path (ranges, merge, columns assembled in two threads) end to end.
   if (args.quick && agree.length > 0) {
     console.error(`bench: the 1- and 2-worker profiles differ in ${agree.join(', ')}`);
+    process.exitCode = 1;
+  }
+  if (byTextDiffers.length > 0) {
+    console.error(`bench: counting by text and by value differ under the distinct cap in ${byTextDiffers.join(', ')}`);
     process.exitCode = 1;
   }
 }

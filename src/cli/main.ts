@@ -63,6 +63,7 @@ async function main(argv: string[]): Promise<number> {
       maxRecords: args.maxRecords,
       memoryLimitBytes: memoryLimitBytes(args.memoryLimit ?? DEFAULT_MEMORY_LIMIT_MB),
       exactValuesLimit: args.exactLimit,
+      countByValue: !args.countByText,
       // The CLI prints the profile and asks nothing of it afterwards.
       retainValues: false,
     };

@@ -12,6 +12,8 @@ export interface CliArgs {
   groupBy: string[];
   metadata?: string;
   noMetadata: boolean;
+  /** Look every cell up by its text as it is read (ProfileOptions.countByValue false). */
+  countByText?: boolean;
   rules?: string;
   failOn: string[];
   quantileType?: number;
@@ -76,6 +78,8 @@ Flags and constraints
 Other
   --workers N                   threads that profile byte ranges of a UTF-8 file in parallel
                                 (default: 1 below 64 MB, else 2 when the machine has 2 cores)
+  --count-by-text               look every number up by its text as it is read, not by value
+                                afterwards (slower; the same profile under the distinct cap)
   -q, --quiet                   no progress on stderr
   -h, --help, --version
 
@@ -134,6 +138,7 @@ export function parseArgs(argv: string[]): CliArgs {
       case '--group-by': a.groupBy.push(value()); break;
       case '--metadata': a.metadata = value(); break;
       case '--no-metadata': a.noMetadata = true; break;
+      case '--count-by-text': a.countByText = true; break;
       case '--rules': a.rules = value(); break;
       case '--fail-on': {
         for (const f of value().split(',').map((s) => s.trim()).filter(Boolean)) {
