@@ -13,7 +13,7 @@ import { SHAPE_DIGITS, SHAPE_IRREGULAR, SHAPE_PADDED, SHAPE_TINY } from '../infe
 import { radixSortFloat64 } from '../stats/radix-sort';
 import { GrowableCodes } from './growable-codes';
 import { hashBytes, hashString, HyperLogLog } from './hyper-log-log';
-import { countRuns, topRuns, ValueCodes } from './number-counts';
+import { countRuns, topRuns, ValueCodes, writeFixed } from './number-counts';
 import { sketchCapacity, ValueSketch, type ValueSketchParts } from './value-sketch';
 
 /**
@@ -241,8 +241,9 @@ export class ColumnAccumulator {
 
   /**
    * Bytes this accumulator holds, plus what assembling its column will add (a sorted copy of the
-   * typed values; the codes widened to 4 bytes per row). An estimate for the memory
-   * ceiling, counted from array capacities (JavaScript arrays at 8 bytes per entry).
+   * typed values; the codes widened to 4 bytes per row, or made for a column counted by value).
+   * An estimate for the memory ceiling, counted from array capacities (JavaScript arrays at 8
+   * bytes per entry).
    */
   heldBytes(): number {
     const values = this.values?.data.byteLength ?? 0;
@@ -250,7 +251,9 @@ export class ColumnAccumulator {
     const held = this.kinds.data.byteLength + values + codes + this.dictionary.heldBytes()
       + (this.sketch?.registers.byteLength ?? 0) + (this.dense?.byteLength ?? 0) + this.categoryCounts.length * 8
       + (this.valueSketch?.heldBytes ?? 0);
-    return held + 8 * (this.values?.length ?? 0) + (this.codes ? 4 * this.codes.length : 0);
+    // A column counted by value makes its codes at assembly (a first-appearance table, then the codes).
+    const codesToCome = this.codes ? 4 * this.codes.length : this.byValue ? 8 * this.kinds.length : 0;
+    return held + 8 * (this.values?.length ?? 0) + codesToCome;
   }
 
   /** The distinct-value sketch (made on first use; see `sketch`). */
@@ -371,12 +374,13 @@ export class ColumnAccumulator {
   private leaveByValue(upTo: number): void {
     if (!this.byValue) return;
     // Under the cap the values count faster than their texts could be looked up one by one.
-    if (this.settleCodes(upTo)) return;
+    if (!this.overCap && this.settleCodes(upTo)) return;
     this.byValue = false;
     this.codes = new GrowableCodes();
     this.codes.reserve(upTo);
     const kinds = this.kinds.data;
     const values = this.values?.data;
+    const point = this.classifier.decimalSeparator === ',' ? 44 : 46;
     for (let r = 0; r < upTo; r++) {
       const kind = kinds[r]! & KIND_MASK;
       if (kind === KIND_ABSENT || kind >= KIND_MISSING || !values) {
@@ -384,7 +388,8 @@ export class ColumnAccumulator {
         continue;
       }
       const v = values[r]!;
-      const n = asciiInto(this.formText(v));
+      let n = this.fixedDigits >= 0 ? writeFixed(v, this.fixedDigits, point, formBytes) : -1;
+      if (n < 0) n = asciiInto(this.formText(v));
       this.countCode(formBytes, 0, n, hashBytes(formBytes, 0, n), kind === KIND_INTEGER, kind, v, r);
     }
   }
@@ -416,8 +421,24 @@ export class ColumnAccumulator {
    */
   settleByValue(): CountedByValue | null {
     if (!this.byValue) return null;
-    return this.settleCodes(this.kinds.length) ? null : this.countedBySort();
+    return this.settleUnderCap() ? null : this.countedBySort();
   }
+
+  /**
+   * The first half of `settleByValue`, for the end of a range: counts the column into the
+   * dictionary when it has at most `maxDistinct` values (true), else leaves it counted by value
+   * (false; then it stays past the cap whatever rows are appended: `overCap` remembers).
+   */
+  settleUnderCap(): boolean {
+    if (!this.byValue) return true;
+    if (this.overCap) return false;
+    if (this.settleCodes(this.kinds.length)) return true;
+    this.overCap = true;
+    return false;
+  }
+
+  /** Set once the column counted by value was found past the cap (distinct values only grow). */
+  private overCap = false;
 
   /**
    * Counts rows before `upTo` into the dictionary from their values, as `settleByValue` does, when
@@ -792,6 +813,7 @@ export class ColumnAccumulator {
       this.leaveByValue(this.kinds.length);
       other.leaveByValue(other.kinds.length);
     }
+    this.overCap ||= other.overCap;
     const base = this.rows;
     const otherRows = other.rows;
     // Past the limit together, both sides keep sketches (made from their rows before these go).

@@ -209,6 +209,8 @@ export class RangeJob {
     if (!this.full) sc.end();
     this.flushCells();
     const st = this.state;
+    // Where ranges run in parallel, so does this: counting the numbers counted by value (under the cap).
+    for (const c of st.columns) c.settleUnderCap();
     st.scan = {
       lineBreaks: sc.lineBreaks, openLastLine: sc.lines > sc.lineBreaks, blankLines: sc.blankLines,
       looseQuotes: sc.looseQuotes, lf: sc.lf, crlf: sc.crlf, cr: sc.cr,

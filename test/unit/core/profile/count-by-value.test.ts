@@ -101,4 +101,34 @@ describe('counting number columns by value', () => {
     const byText = profileBytes(bytes, resolveOptions({ maxDistinct: 500, topN: 20, countByValue: false })).profile.columns[0]!;
     expect(byText.distinctExact).toBe(false);
   });
+
+  // The same profile both ways where the column is read with other settings (expected: counting
+  // by text, the route every other test checks against its references).
+  const bothWays = (bytes: Uint8Array, input: Parameters<typeof resolveOptions>[0]) => {
+    const a = profileBytes(bytes, resolveOptions({ ...input, countByValue: false }));
+    const b = profileBytes(bytes, resolveOptions(input));
+    expect(JSON.stringify(b.profile.columns)).toBe(JSON.stringify(a.profile.columns));
+    expect(JSON.stringify(b.profile.groups)).toBe(JSON.stringify(a.profile.groups));
+    return b;
+  };
+
+  it('writes decimal commas back as the file writes them', () => {
+    const lines = ['v;w', ...Array.from({ length: 300 }, (_, i) => `${(i % 37 / 4).toFixed(2).replace('.', ',')};${String(i % 11 / 2).replace('.', ',')}`)];
+    const { profile } = bothWays(enc.encode(lines.join('\n') + '\n'), { delimiter: ';', decimalSeparator: ',' });
+    expect(profile.columns[0]!.frequencies[0]!.value).toMatch(/^\d+,\d\d$/);
+    expect(profile.columns[0]!.distinct).toBe(37);
+  });
+
+  it('leaves counting by value when the column passes the exact-values limit (rank sketch)', () => {
+    const lines = ['v', ...Array.from({ length: 5000 }, (_, i) => String((i * 7919) % 613))];
+    const { profile } = bothWays(enc.encode(lines.join('\n') + '\n'), { exactValuesLimit: 1000 });
+    expect(profile.columns[0]!.approximate).not.toBeNull();
+  });
+
+  it('groups by a column of whole numbers counted by value (the session compares the groups)', () => {
+    const lines = ['site,reading', ...Array.from({ length: 400 }, (_, i) => `${1 + (i % 4)},${(10 + (i % 13) / 8).toFixed(3)}`)];
+    const run = bothWays(enc.encode(lines.join('\n') + '\n'), { groupBy: ['site'] });
+    expect(run.profile.groups.length).toBe(1);
+    expect(run.session.compareGroups('reading', 'site')?.groups.length).toBe(4);
+  });
 });

@@ -27,6 +27,22 @@ describe('radixSortFloat64', () => {
     fc.assert(fc.property(fc.float64Array({ noNaN: true, maxLength: 300 }), (a) => agrees(a)), { numRuns: 500 });
   });
 
+  it('leaves ordered input as it is, and sorts input ordered but for one pair (even +0 before -0)', () => {
+    const ordered = Array.from({ length: 500 }, (_, i) => i - 250);
+    agrees(ordered);
+    agrees([...ordered.slice(0, 499), -1000]);
+    agrees([...ordered.slice(0, 250), 0, -0, ...ordered.slice(251)]);
+    fc.assert(fc.property(fc.float64Array({ noNaN: true, maxLength: 300 }), fc.nat(), (a, k) => {
+      const sorted = Float64Array.from(a).sort();
+      agrees(sorted);
+      if (sorted.length > 1) {
+        const i = k % (sorted.length - 1);
+        [sorted[i], sorted[i + 1]] = [sorted[i + 1]!, sorted[i]!];
+        agrees(sorted);
+      }
+    }), { numRuns: 300 });
+  });
+
   it('orders zeros, subnormals, infinities and the extremes', () => {
     const special = [0, -0, 5e-324, -5e-324, 2.2250738585072014e-308, -2.2250738585072014e-308, Number.MAX_VALUE, -Number.MAX_VALUE, Infinity, -Infinity, 1, -1];
     fc.assert(fc.property(fc.array(fc.constantFrom(...special), { maxLength: 200 }), (a) => agrees(a)), { numRuns: 300 });
