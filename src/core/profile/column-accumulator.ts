@@ -62,6 +62,13 @@ export class GrowableBytes {
     if (this.length === this.data.length) this.grow();
     this.data[this.length++] = v;
   }
+  /** Makes room for `n` entries in all, exactly. */
+  reserve(n: number): void {
+    if (n <= this.data.length) return;
+    const next = new Uint8Array(n);
+    next.set(this.data.subarray(0, this.length));
+    this.data = next;
+  }
   /** Doubles the capacity. */
   grow(): void {
     const next = new Uint8Array(Math.max(INITIAL, this.data.length * 2));
@@ -280,6 +287,13 @@ export class ColumnAccumulator {
     this.values = null;
     this.codes = null;
     this.dense = null;
+  }
+
+  /** Makes room for `rows` rows in the per-row arrays it has (see RangePlan.expectedBytes). */
+  reserve(rows: number): void {
+    this.kinds.reserve(rows);
+    this.values?.ensure(rows, true);
+    this.codes?.reserve(rows);
   }
 
   /** Adds the next row's cell; `text` null when the record had no such field. */

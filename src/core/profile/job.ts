@@ -91,7 +91,16 @@ export interface RangePlan {
   startOffset: number;
   /** What CSV on the Web metadata declares, if any. */
   declared: DeclaredSchema | null;
+  /**
+   * Bytes the range is expected to hold (its length; the file's size for one pass), when known:
+   * once the first megabytes tell the bytes per record, the per-row arrays are sized for the
+   * whole range at once instead of doubling (each doubling copies them and touches new pages).
+   */
+  expectedBytes?: number;
 }
+
+/** Bytes read before the per-row arrays are sized from the bytes per record seen so far. */
+const SIZE_AFTER = 4 << 20;
 
 /**
  * Reads the records of one byte range of the UTF-8 text into column accumulators. A whole file is
@@ -111,6 +120,8 @@ export class RangeJob {
   private readonly startOffset: number;
   /** The records' cells on their way to the columns (made with the columns). */
   private batch: CellBatch | null = null;
+  /** See RangePlan.expectedBytes; 0 once the arrays were sized (or when it is not known). */
+  private expectedBytes: number;
 
   constructor(plan: RangePlan) {
     const bd = byteDialect({ delimiter: plan.dialect.delimiter, quote: plan.dialect.quote });
@@ -118,6 +129,7 @@ export class RangeJob {
     this.scanner = new RecordScanner(bd, (r) => this.onRecord(r), { startOffset: plan.startOffset });
     this.headerPending = plan.names === null;
     this.startOffset = plan.startOffset;
+    this.expectedBytes = plan.expectedBytes ?? 0;
     this.state = {
       options, source: plan.source, encoding: plan.encoding, bom: plan.bomLength > 0, bomLength: plan.bomLength,
       dialect: plan.dialect, byteDialect: bd, names: [], headerNotes: [], notices: [], columns: [],
@@ -168,11 +180,31 @@ export class RangeJob {
     if (this.batch !== null) this.batch.chunk = utf8;
     this.scanner.push(utf8);
     this.flushCells();
+    if (this.expectedBytes > 0 && this.state.bytes >= SIZE_AFTER) this.sizeRows();
     const limit = this.state.options.memoryLimitBytes;
     if (limit !== null && !this.full && this.state.bytes - this.checkedAt >= MEMORY_CHECK_STEP) {
       this.checkedAt = this.state.bytes;
       if (this.heldBytes() > limit) this.stopAtLimit(limit);
     }
+  }
+
+  /**
+   * Sizes the per-row arrays for the rows the range is expected to hold: the rows so far scaled
+   * by the bytes still to come, with 2% to spare (a short estimate only means one more doubling).
+   */
+  private sizeRows(): void {
+    const st = this.state;
+    const expected = this.expectedBytes;
+    this.expectedBytes = 0;
+    const rec = st.records;
+    if (rec.rows === 0 || expected <= st.bytes) return;
+    let rows = Math.ceil(rec.rows * (expected / st.bytes) * 1.02);
+    if (st.options.maxRecords !== null) rows = Math.min(rows, st.options.maxRecords);
+    if (rows <= rec.rows) return;
+    rec.offsets.ensure(rows, true);
+    rec.lines.ensure(rows, true);
+    rec.seen.reserve(rows);
+    for (const c of st.columns) c.reserve(rows);
   }
 
   /** Adds the batched cells to the columns; the current chunk may go after this. */
@@ -313,7 +345,7 @@ export function createProfileJob(options: ProfileOptions, source: JobSource = { 
     const utf8 = transcoder.push(first);
     const dialect = planDialect(utf8, options);
     if (guess.encoding !== 'utf-8') kept = new GrowableBytesList();
-    range = new RangeJob({ options, source, encoding: guess.encoding, bomLength: guess.bomLength, dialect, names: null, startOffset: 0, declared });
+    range = new RangeJob({ options, source, encoding: guess.encoding, bomLength: guess.bomLength, dialect, names: null, startOffset: 0, declared, expectedBytes: source.size });
     range.state.notices.push(...metaNotices);
     feed(utf8);
   };

@@ -54,7 +54,7 @@ export function planRanges(
   const tasks = cuts.map((from, i): RangeTask => ({
     from,
     to: cuts[i + 1] ?? size,
-    plan: { options: rangeOptions, source, encoding: 'utf-8', bomLength: bom, dialect, names: i === 0 ? null : names, startOffset: from - bom, declared: null },
+    plan: { options: rangeOptions, source, encoding: 'utf-8', bomLength: bom, dialect, names: i === 0 ? null : names, startOffset: from - bom, declared: null, expectedBytes: (cuts[i + 1] ?? size) - from },
   }));
   return { tasks };
 }

@@ -155,6 +155,13 @@ export class RecordKeySet {
     return s;
   }
 
+  /** Makes room for `n` keys in all without growing (the table then stays under 3/4 full). */
+  reserve(n: number): void {
+    let cap = this.mask + 1;
+    while (n * 4 > cap * 3) cap *= 2;
+    if (cap !== this.mask + 1) this.rehash(cap);
+  }
+
   private grow(): void {
     this.rehash((this.mask + 1) * 2);
   }

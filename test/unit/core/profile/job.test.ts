@@ -181,3 +181,23 @@ describe('encodings and caps through the engine', () => {
     expect(v.flagTotals.find((t) => t.rule === 'not-a-number')).toMatchObject({ total: 1250, kept: 100 });
   });
 });
+
+describe('sizing the per-row arrays from the expected size', () => {
+  // Expected: the same profile whether or not the size is known up front (it only changes how the
+  // arrays grow), with 5 MB of records so that the sizing (after 4 MiB) happens; plain counting.
+  it('gives the same profile, with or without the size and with a size that is wrong', () => {
+    const lines = ['k,x,t'];
+    for (let i = 0; lines.length < 300_000; i++) lines.push(`${i},${(i % 997) / 8},w${i % 13}`);
+    const bytes = new TextEncoder().encode(lines.join('\n') + '\n');
+    const run = (size?: number) => {
+      const job = createProfileJob(resolveOptions({}), size === undefined ? { name: null } : { name: null, size });
+      for (let at = 0; at < bytes.length; at += 1 << 20) job.push(bytes.subarray(at, at + (1 << 20)));
+      return JSON.stringify(job.finish((o, l) => bytes.subarray(o, o + l)).profile);
+    };
+    expect(bytes.length).toBeGreaterThan(4 << 20);
+    const plain = run();
+    expect(run(bytes.length)).toBe(plain);
+    expect(run(2 * bytes.length)).toBe(plain);
+    expect(run(Math.floor(bytes.length / 2))).toBe(plain);
+  });
+});
