@@ -201,6 +201,10 @@ export class RangeJob {
     let rows = Math.ceil(rec.rows * (expected / st.bytes) * 1.02);
     if (st.options.maxRecords !== null) rows = Math.min(rows, st.options.maxRecords);
     if (rows <= rec.rows) return;
+    // Sized past the memory ceiling, the arrays would stop reading at once; growing, they stop it
+    // only where the records really need more.
+    const limit = st.options.memoryLimitBytes;
+    if (limit !== null && this.heldBytes() * (rows / rec.rows) > limit) return;
     rec.offsets.ensure(rows, true);
     rec.lines.ensure(rows, true);
     rec.seen.reserve(rows);

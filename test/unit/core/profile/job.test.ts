@@ -200,4 +200,20 @@ describe('sizing the per-row arrays from the expected size', () => {
     expect(run(2 * bytes.length)).toBe(plain);
     expect(run(Math.floor(bytes.length / 2))).toBe(plain);
   });
+
+  it('stops at the memory ceiling where it would without the size', () => {
+    const lines = ['k,x,t'];
+    for (let i = 0; lines.length < 700_000; i++) lines.push(`${i},${(i % 997) / 8},w${i % 13}`);
+    const bytes = new TextEncoder().encode(lines.join('\n') + '\n');
+    const rows = (size?: number) => {
+      const job = createProfileJob(resolveOptions({ memoryLimitBytes: 60e6 }), size === undefined ? { name: null } : { name: null, size });
+      for (let at = 0; at < bytes.length; at += 1 << 20) job.push(bytes.subarray(at, at + (1 << 20)));
+      const p = job.finish().profile;
+      return { rows: p.rows, partial: p.partial };
+    };
+    const plain = rows();
+    expect(plain.partial).toBe(true);
+    expect(plain.rows).toBeGreaterThan(300_000);
+    expect(rows(bytes.length)).toEqual(plain);
+  });
 });
