@@ -131,7 +131,7 @@ export interface AccumulatorParts {
   /** Set once the column passed the exact-values limit (then `values` is null). */
   valueSketch: ValueSketchParts | null;
   /** Whether number cells are counted by value, and their form (see `ColumnAccumulator.byValue`). */
-  form: [byValue: boolean, fixedDigits: number, shortest: boolean, lastShape: number];
+  form: [byValue: boolean, fixedDigits: number, shortest: boolean, lastShape: number, exceptions: number, overCap: boolean];
 }
 
 /**
@@ -147,6 +147,11 @@ export interface CountedByValue {
 }
 
 const encoder = new TextEncoder();
+/** Exceptions a column counted by value takes (see takeException): this many, plus one per EXCEPTION_SHARE rows. */
+const EXCEPTIONS_FROM = 64;
+const EXCEPTION_SHARE = 64;
+/** Distinct texts among them. */
+const EXCEPTION_TEXTS = 64;
 /** Bytes of the text of a number counted by value (ASCII: digits, sign, point or comma). */
 let formBytes = new Uint8Array(64);
 
@@ -349,8 +354,11 @@ export class ColumnAccumulator {
       else this.startValues(value);
     } else if (values !== null) values.push(NaN);
     if (this.byValue) {
-      if ((kind === KIND_INTEGER || kind === KIND_DECIMAL) && rawKind < KIND_SPACED && (r.shape === this.lastShape || this.keepsForm(r.shape))) return;
-      this.leaveByValue(row);
+      if ((kind === KIND_INTEGER || kind === KIND_DECIMAL) && rawKind < KIND_SPACED && (r.shape === this.lastShape || this.keepsForm(r.shape))) {
+        this.codes?.push(-1);
+        return;
+      }
+      if (!this.takeException(row)) this.leaveByValue(row);
     }
     this.countCode(bytes, start, end, hash, canonical, kind, value, row);
   }
@@ -372,6 +380,46 @@ export class ColumnAccumulator {
     return true;
   }
 
+  /**
+   * Whether a cell that is not a number in the column's form can be counted by its text beside the
+   * values (an exception: `-0.0000`, `<0.01`, a stray word), keeping the column counted by value.
+   * Only a few: at most EXCEPTION_TEXTS distinct texts, kept below the cap, and about one cell in
+   * EXCEPTION_SHARE; the codes array (-1 but for exceptions) is made at the first.
+   */
+  private takeException(row: number): boolean {
+    if (this.exceptions >= EXCEPTIONS_FROM + row / EXCEPTION_SHARE) return false;
+    if (this.distinct >= Math.min(EXCEPTION_TEXTS, this.limits.maxDistinct - 1)) return false;
+    this.exceptions++;
+    if (this.codes === null) {
+      const codes = new GrowableCodes();
+      codes.reserve(row + 1);
+      for (let r = 0; r < row; r++) codes.push(-1);
+      this.codes = codes;
+    }
+    return true;
+  }
+
+  /** Cells counted as exceptions while counted by value (see takeException). */
+  private exceptions = 0;
+
+  /**
+   * Empties the text counts (dictionary, codes by text, the cache by value) and returns the
+   * dictionary with, per code, its first entry: for re-counting the exceptions in a new order.
+   */
+  private resetTextCounts(): { dictionary: ByteDictionary; entries: number[][] } {
+    const dictionary = this.dictionary;
+    const entries: number[][] = Array.from({ length: this.distinct }, () => []);
+    for (let k = 0; k < dictionary.size; k++) entries[dictionary.values[k]!]!.push(k);
+    this.dictionary = new ByteDictionary();
+    this.categoryCounts = [];
+    this.distinct = 0;
+    this.wideTexts = new Map();
+    this.categoryTexts = null;
+    this.dense = null;
+    this.exceptions = 0;
+    return { dictionary, entries };
+  }
+
   /** The text of a number cell counted by value: its value in the column's form. */
   private formText(v: number): string {
     const t = this.fixedDigits >= 0 ? v.toFixed(this.fixedDigits) : String(v);
@@ -390,6 +438,8 @@ export class ColumnAccumulator {
     // Under the cap the values count faster than their texts could be looked up one by one.
     if (!this.overCap && this.settleCodes(upTo)) return;
     this.byValue = false;
+    const ex = this.codes;
+    const old = this.resetTextCounts();
     this.codes = new GrowableCodes();
     this.codes.reserve(upTo);
     const kinds = this.kinds.data;
@@ -397,6 +447,14 @@ export class ColumnAccumulator {
     const point = this.classifier.decimalSeparator === ',' ? 44 : 46;
     for (let r = 0; r < upTo; r++) {
       const kind = kinds[r]! & KIND_MASK;
+      const c = ex ? ex.get(r) : -1;
+      if (c >= 0) {
+        // An exception: its bytes as first counted (another spelling of the same text counts alike).
+        const k = old.entries[c]![0]!;
+        const b = old.dictionary.bytesOf(k);
+        this.countCode(b, 0, b.length, old.dictionary.hashes[k]!, false, kind, NaN, r);
+        continue;
+      }
       if (kind === KIND_ABSENT || kind >= KIND_MISSING || !values) {
         this.codes?.push(-1);
         continue;
@@ -463,11 +521,29 @@ export class ColumnAccumulator {
     const rows = upTo;
     const kinds = this.kinds.data;
     const values = this.values?.data;
+    const ex = this.codes;
     const seen = new ValueCodes();
+    const remap = new Int32Array(this.distinct).fill(-1);
+    /** Per new code: the row of its value (>= 0), or -(exception code + 1). */
+    const origin: number[] = [];
     const codes = new Int32Array(rows);
     const max = this.limits.maxDistinct;
     let over = false;
     for (let r = 0; r < rows; r++) {
+      const e = ex ? ex.get(r) : -1;
+      if (e >= 0) {
+        let c = remap[e]!;
+        if (c < 0) {
+          if (origin.length >= max) {
+            over = true;
+            break;
+          }
+          c = remap[e] = origin.length;
+          origin.push(-(e + 1));
+        }
+        codes[r] = c;
+        continue;
+      }
       const kind = kinds[r]! & KIND_MASK;
       if (kind === KIND_ABSENT || kind >= KIND_MISSING || !values) {
         codes[r] = -1;
@@ -476,26 +552,32 @@ export class ColumnAccumulator {
       const v = values[r]!;
       let c = seen.get(v);
       if (c < 0) {
-        if (seen.size >= max) {
+        if (origin.length >= max) {
           over = true;
           break;
         }
-        c = seen.size;
+        c = origin.length;
         seen.add(v, c);
+        origin.push(r);
       }
       codes[r] = c;
     }
     if (over) return false;
-    // Codes are by first appearance, as the dictionary would have given them.
-    const texts: string[] = new Array<string>(seen.size);
-    for (let r = 0; r < rows; r++) {
-      const c = codes[r]!;
-      if (c >= 0 && texts[c] === undefined) texts[c] = this.formText(values![r]!);
-    }
+    // Codes are by first appearance, values and exceptions together, as the dictionary would have given them.
     this.byValue = false;
-    for (const t of texts) {
-      const n = asciiInto(t);
-      this.addValue(formBytes, 0, n, hashString(t));
+    const old = this.resetTextCounts();
+    for (const o of origin) {
+      if (o >= 0) {
+        const t = this.formText(values![o]!);
+        const n = asciiInto(t);
+        this.addValue(formBytes, 0, n, hashString(t));
+      } else {
+        // Every spelling of the exception's text (invalid UTF-8 that decodes alike shares a code).
+        for (const k of old.entries[-o - 1]!) {
+          const b = old.dictionary.bytesOf(k);
+          this.addValue(b, 0, b.length, old.dictionary.hashes[k]!);
+        }
+      }
     }
     const counts = this.categoryCounts;
     const out = new GrowableCodes();
@@ -518,8 +600,24 @@ export class ColumnAccumulator {
     n = 0;
     for (let r = 0; r < v.length; r++) if (v[r] === v[r]) sorted[n++] = v[r]!;
     radixSortFloat64(sorted);
-    const top = topRuns(sorted, this.limits.heavyCounters).map((x) => ({ value: this.formText(x.value), count: x.count }));
-    return { distinct: countRuns(sorted), top, sorted };
+    // The values of exceptions (`-0.0000` reads as 0) are in the statistics but count by their text.
+    const ex = this.codes;
+    let counted = sorted;
+    if (ex !== null) {
+      let m = 0;
+      for (let r = 0; r < v.length; r++) if (v[r] === v[r] && ex.get(r) < 0) m++;
+      if (m < n) {
+        counted = new Float64Array(m);
+        m = 0;
+        for (let r = 0; r < v.length; r++) if (v[r] === v[r] && ex.get(r) < 0) counted[m++] = v[r]!;
+        radixSortFloat64(counted);
+      }
+    }
+    const k = this.limits.heavyCounters;
+    const top = topRuns(counted, k).map((x) => ({ value: this.formText(x.value), count: x.count }));
+    for (const [value, code] of this.categories) top.push({ value, count: this.categoryCounts[code]! });
+    top.sort((a, b) => b.count - a.count);
+    return { distinct: countRuns(counted) + this.distinct, top: top.slice(0, k), sorted };
   }
 
   /** Counts one cell's text (its bytes, their hash): the distinct-value estimate, the category code, the count. */
@@ -775,7 +873,7 @@ export class ColumnAccumulator {
       missing: this.missing, absent: this.absent, spaced: this.spaced,
       dense: this.dense, denseKind: this.denseKind, denseBase: this.denseBase,
       valueCount: this.valueCount, valueSketch: this.valueSketch ? this.valueSketch.toParts() : null,
-      form: [this.byValue, this.fixedDigits, this.shortest, this.lastShape],
+      form: [this.byValue, this.fixedDigits, this.shortest, this.lastShape, this.exceptions, this.overCap],
     };
   }
 
@@ -812,7 +910,7 @@ export class ColumnAccumulator {
     a.denseBase = p.denseBase;
     a.valueCount = p.valueCount;
     a.valueSketch = p.valueSketch ? ValueSketch.fromParts(p.valueSketch) : null;
-    [a.byValue, a.fixedDigits, a.shortest, a.lastShape] = p.form;
+    [a.byValue, a.fixedDigits, a.shortest, a.lastShape, a.exceptions, a.overCap] = p.form;
     return a;
   }
 
@@ -823,11 +921,14 @@ export class ColumnAccumulator {
    */
   append(other: ColumnAccumulator): void {
     // Counted by value together only when both are and their forms agree; else both by text.
-    if ((this.byValue || other.byValue) && !(this.byValue && other.byValue && this.mergeForm(other))) {
+    // Exceptions together must stay below the cap (see takeException).
+    const together = this.distinct + other.distinct < this.limits.maxDistinct;
+    if ((this.byValue || other.byValue) && !(this.byValue && other.byValue && together && this.mergeForm(other))) {
       this.leaveByValue(this.kinds.length);
       other.leaveByValue(other.kinds.length);
     }
     this.overCap ||= other.overCap;
+    this.exceptions += other.exceptions;
     const base = this.rows;
     const otherRows = other.rows;
     // Past the limit together, both sides keep sketches (made from their rows before these go).
@@ -878,6 +979,17 @@ export class ColumnAccumulator {
     // Misra–Gries summaries merge by adding counters and errors, then keeping the largest
     // (Agarwal et al. 2012); exact counts are a summary with error 0.
     this.frequencyError += other.frequencyError;
+    if (this.byValue && (this.codes !== null || other.codes !== null)) {
+      // Exceptions on one side only: the other side's rows have none.
+      const none = (n: number): GrowableCodes => {
+        const c = new GrowableCodes();
+        c.reserve(n);
+        for (let r = 0; r < n; r++) c.push(-1);
+        return c;
+      };
+      this.codes ??= none(base);
+      other.codes ??= none(otherRows);
+    }
     if (this.capped || other.capped || this.distinct > this.limits.maxDistinct) {
       this.capped = true;
       this.codes = null;

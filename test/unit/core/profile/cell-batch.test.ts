@@ -68,8 +68,8 @@ describe('the dense cache of a column that reaches its cap', () => {
   // drops the cache, and the cell must still count (this threw before: the cache was written after
   // it was dropped). Expected: one row per cell, every cell counted once (common practice).
   it('counts the cell that passed the cap', () => {
-    const acc = new ColumnAccumulator(new CellClassifier([''], '.'), { maxDistinct: 1100, heavyCounters: 1024 });
-    // A text cell first: the column is then counted by text as its cells arrive (not by value).
+    // Counted by text as the cells arrive (not by value), so that the dense cache is used.
+    const acc = new ColumnAccumulator(new CellClassifier([''], '.'), { maxDistinct: 1100, heavyCounters: 1024, byValue: false });
     acc.add('x');
     for (let v = 0; v <= 1100; v++) acc.add(String(v));
     expect(acc.byValue).toBe(false);

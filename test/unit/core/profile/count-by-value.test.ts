@@ -11,6 +11,8 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { profileBytes } from '../../../../src/core/engine';
 import { resolveOptions } from '../../../../src/core/options';
+import { CellClassifier } from '../../../../src/core/infer/classify-cell';
+import { ColumnAccumulator } from '../../../../src/core/profile/column-accumulator';
 import { byCountThenValue } from '../../../../src/core/profile/frequency-table';
 import { profileInRanges } from './range-harness';
 
@@ -45,12 +47,16 @@ describe('counting number columns by value', () => {
   });
 
   it('gives the same profile at the cap, and where a text cell ends counting by value; past the cap, exact counts', () => {
-    // 40 distinct values, cap 40: exact both ways; a text cell at the end then makes the column leave.
+    // 40 distinct values, cap 40: exact both ways. With a text cell (an exception, counted beside
+    // the values) and cap 41; with 70 distinct texts (too many exceptions: the column leaves
+    // counting by value) and cap 110.
     const rows = Array.from({ length: 200 }, (_, i) => [(i % 40).toFixed(1), String(i % 7), String(i)]);
-    for (const tail of [[], [['x', '1', '1']]]) {
-      const bytes = csv([...rows, ...tail]);
-      const a = profileBytes(bytes, resolveOptions({ maxDistinct: 40, countByValue: false })).profile;
-      const b = profileBytes(bytes, resolveOptions({ maxDistinct: 40 })).profile;
+    const texts = Array.from({ length: 70 }, (_, i) => [`t${i}`, '1', '1']);
+    const cases: [string[][], number][] = [[[], 40], [[['x', '1', '1']], 41], [texts, 110]];
+    for (const [tail, cap] of cases) {
+      const bytes = csv([...rows, ...tail, ...rows]);
+      const a = profileBytes(bytes, resolveOptions({ maxDistinct: cap, countByValue: false })).profile;
+      const b = profileBytes(bytes, resolveOptions({ maxDistinct: cap })).profile;
       expect(JSON.stringify(b.columns[0])).toBe(JSON.stringify(a.columns[0]));
     }
     // One value more than the cap: counted from the sorted values (exact), and as past the cap
@@ -63,7 +69,7 @@ describe('counting number columns by value', () => {
     // Past the cap and then a text cell: as counted by text from the start, bounded counters and
     // all (split the same way: past the cap those depend on the split, within their stated bound).
     for (const parts of [1, 2]) {
-      const late = csv([...rows, ['40.0', '1', '1'], ...rows, ['x', '1', '1'], ...rows]);
+      const late = csv([...rows, ['40.0', '1', '1'], ...rows, ...texts, ...rows]);
       const t = profileInRanges(late, resolveOptions({ maxDistinct: 40, countByValue: false }), parts, 16, 64).profile;
       const v = profileInRanges(late, resolveOptions({ maxDistinct: 40 }), parts, 16, 64);
       expect(v.ranges).toBe(parts);
@@ -100,6 +106,35 @@ describe('counting number columns by value', () => {
     // Counted by text the same column is estimated past the cap (what this replaces).
     const byText = profileBytes(bytes, resolveOptions({ maxDistinct: 500, topN: 20, countByValue: false })).profile.columns[0]!;
     expect(byText.distinctExact).toBe(false);
+  });
+
+  it('keeps counting by value past a few odd cells, counted beside the values (1, 2 and 4 ranges)', () => {
+    // Lab exports write a value below the detection limit as "<0.01", a blank as "", a sign as
+    // "-0.0000" (common practice). Those cells are counted by text beside the values; the column
+    // stays counted by value, and the profile is the one counting every cell by text gives.
+    const odd = ['<0.01', '', '-0.0000', 'NA', 'n/a'];
+    const values = Array.from({ length: 4000 }, (_, i) => (i % 97 === 5 ? odd[i % odd.length]! : ((i * 37) % 301 / 100).toFixed(4)));
+    const acc = new ColumnAccumulator(new CellClassifier([''], '.'), { maxDistinct: 1000, heavyCounters: 64 });
+    for (const v of values) acc.add(v);
+    expect(acc.byValue).toBe(true);
+    const bytes = enc.encode(['v', ...values].join('\n') + '\n');
+    for (const cap of [1000, 200]) {
+      const byText = profileBytes(bytes, resolveOptions({ maxDistinct: cap, countByValue: false })).profile.columns[0]!;
+      for (const parts of [1, 2, 4]) {
+        const run = profileInRanges(bytes, resolveOptions({ maxDistinct: cap }), parts, 64, 64);
+        const col = run.profile.columns[0]!;
+        if (cap === 1000) expect(JSON.stringify(col)).toBe(JSON.stringify(byText));
+        else {
+          // Past the cap (301 values and 2 texts; "", "NA" and "n/a" are missing by default):
+          // exact, against a Set.
+          const missing = new Set(resolveOptions({}).missingTokens);
+          expect(col.distinct).toBe(new Set(values.filter((v) => !missing.has(v))).size);
+          expect(col.distinctExact).toBe(true);
+          const counts = rollup(values, (v) => v.length, (v) => v);
+          for (const f of col.frequencies) expect(f.count, f.value).toBe(counts.get(f.value));
+        }
+      }
+    }
   });
 
   // The same profile both ways where the column is read with other settings (expected: counting
