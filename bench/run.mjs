@@ -2,8 +2,9 @@
 //   - raw read throughput (1 MiB chunks, counting line breaks): the ceiling for any reader,
 //   - the CLI's full profile (`dist/cli.js FILE --format json`): wall time, MB/s, peak RSS, for
 //     1 and 2 workers, and whether the two profiles agree,
-//   - the main thread's event-loop delay while worker threads profile the file (what an editor's
-//     extension host would feel),
+//   - the editor's own profiling worker (dist/worker.js, its message protocol) on the same file:
+//     its first view, its exact profile read in parallel ranges (which must equal the CLI's), and
+//     this thread's event-loop delay meanwhile (what the extension host feels),
 //   - one more run whose columns pass --exact-limit (rank sketches: bounded memory per column),
 //   - a baseline run with --count-by-text (every number looked up by its text as it is read, as
 //     before numbers were counted by value), as a ratio; its profile must be the same under the cap,
@@ -17,10 +18,11 @@
 import { spawn } from 'node:child_process';
 import { createReadStream, existsSync, mkdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { availableParallelism, cpus, freemem, loadavg, totalmem } from 'node:os';
-import { dirname, join, resolve } from 'node:path';
+import { basename, dirname, join, resolve } from 'node:path';
 import { monitorEventLoopDelay, performance } from 'node:perf_hooks';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { Worker } from 'node:worker_threads';
+import * as esbuild from 'esbuild';
 import { generateFile, GENERATOR_VERSION } from './generate-file.mjs';
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), '..');
@@ -157,8 +159,19 @@ function differences(a, b) {
   return out;
 }
 
-/** The main thread's event-loop delay while a worker thread (with its own range workers) profiles the file. */
-async function eventLoop(path, size, workers) {
+/**
+ * The editor's own profiling worker (dist/worker.js) driven through its message protocol, as the
+ * extension host drives it: the first view (its first pass) and the exact profile read in
+ * `workers` parallel ranges, while this thread (the stand-in for the extension host) measures its
+ * event-loop delay.
+ */
+async function editorWorker(path, size, workers) {
+  // The options as the host sends them, made by the engine's own code (bundled from src/ here).
+  const built = await esbuild.build({
+    stdin: { contents: "export { resolveOptions } from './src/core/options'; export { toWireOptions } from './src/protocol/worker';", resolveDir: root, loader: 'ts' },
+    bundle: true, format: 'esm', platform: 'neutral', write: false, logLevel: 'silent',
+  });
+  const { resolveOptions, toWireOptions } = await import(`data:text/javascript;base64,${Buffer.from(built.outputFiles[0].text).toString('base64')}`);
   // The histogram records the time between its 10 ms timer's runs: the delay is that minus 10 ms.
   const RES = 10;
   const h = monitorEventLoopDelay({ resolution: RES });
@@ -171,22 +184,32 @@ async function eventLoop(path, size, workers) {
   }, 10);
   const t0 = performance.now();
   h.enable();
+  let firstView = null;
   const reply = await new Promise((res, rej) => {
-    const w = new Worker(cli, { workerData: { assayProfile: { file: path, size, workers } } });
-    w.once('message', (m) => {
-      res(m);
-      void w.terminate();
+    const w = new Worker(join(root, 'dist', 'worker.js'));
+    w.on('message', (m) => {
+      if (m.type === 'profiled' && !m.final) firstView = { seconds: +((performance.now() - t0) / 1000).toFixed(3), rows: m.profile.rows };
+      if ((m.type === 'profiled' && m.final) || m.type === 'failed') {
+        res(m);
+        void w.terminate();
+      }
     });
     w.once('error', rej);
+    w.postMessage({
+      type: 'profile', id: 1, uri: pathToFileURL(path).href, version: 1, name: basename(path), size, options: toWireOptions(resolveOptions({})),
+      input: { kind: 'path', path }, firstPass: FIRST_PASS_RECORDS, chunkBytes: 1 << 20, rangeWorkers: workers,
+    });
   });
   h.disable();
   clearInterval(tick);
-  if (reply.type !== 'profile') throw new Error(`event-loop run: ${reply.message}`);
+  if (reply.type !== 'profiled') throw new Error(`editor worker: ${reply.message}`);
   const delay = (ns) => +Math.max(0, ns / 1e6 - RES).toFixed(1);
+  const seconds = (performance.now() - t0) / 1000;
   return {
-    workers, seconds: +((performance.now() - t0) / 1000).toFixed(3), rows: reply.profile.rows,
+    workers, ranges: reply.ranges, seconds: +seconds.toFixed(3), mbPerSecond: +(size / MB / seconds).toFixed(1), rows: reply.profile.rows, firstView,
     maxMs: delay(h.max), p99Ms: delay(h.percentile(99)), meanMs: delay(h.mean), maxTimerLagMs: +maxGap.toFixed(1),
     histogramNs: { min: h.min, max: h.max, mean: Math.round(h.mean), p50: h.percentile(50), p99: h.percentile(99), resolutionMs: RES },
+    profile: reply.profile,
   };
 }
 
@@ -255,7 +278,9 @@ async function main() {
   const sameRun = runs.find((r) => r.workers === wMax);
   // Past the distinct cap counting by text estimates where counting by value is exact: only there may they differ.
   const byTextDiffers = differences(byText.profile, sameRun.profile).filter((d) => !d.endsWith('(beyond the distinct cap)'));
-  const loop = await eventLoop(file.path, size, Math.max(...args.workers));
+  const loop = await editorWorker(file.path, size, wMax);
+  // The editor reads the same file with the same options: its profile is the CLI's (the source named alike).
+  const editorDiffers = differences({ ...loop.profile, source: sameRun.profile.source }, sameRun.profile);
   const duck = args.duckdb ? await duckdb(file.path, size, Math.max(...args.workers)) : { skipped: 'not asked (--no-duckdb)' };
   const best = runs.reduce((a, b) => (b.mbPerSecond > a.mbPerSecond ? b : a));
 
@@ -269,7 +294,7 @@ async function main() {
     const sp = runs[0].seconds / runs[runs.length - 1].seconds;
     rows.push([`speed-up ${runs[0].workers} -> ${runs[runs.length - 1].workers} workers`, '', '', '', `${sp.toFixed(2)}x`]);
   }
-  rows.push([`event loop during a ${loop.workers}-worker run`, loop.seconds, '', '', `delay max ${loop.maxMs} ms, p99 ${loop.p99Ms} ms, mean ${loop.meanMs} ms`]);
+  rows.push([`editor worker (dist/worker.js), ${loop.ranges} range${loop.ranges > 1 ? 's' : ''}`, loop.seconds, loop.mbPerSecond, '', `first view ${loop.firstView ? `${loop.firstView.seconds} s (${loop.firstView.rows} rows)` : 'none'}; host event-loop delay max ${loop.maxMs} ms, p99 ${loop.p99Ms} ms`]);
   if ('skipped' in duck) rows.push(['@duckdb/node-api SUMMARIZE', '', '', '', `skipped: ${duck.skipped}`]);
   else rows.push([`@duckdb/node-api SUMMARIZE, ${duck.threads} threads`, duck.seconds, duck.mbPerSecond, '', `assay/duckdb throughput ${(best.mbPerSecond / duck.mbPerSecond).toFixed(2)}x`]);
   console.log('\n' + table(rows));
@@ -285,7 +310,7 @@ async function main() {
     }),
     sketched: sketched && (({ profile, ...r }) => (void profile, { exactLimit: args.sketchLimit, ...r }))(sketched),
     byText: (({ profile, ...r }) => (void profile, { ...r, speedUp: +(byText.seconds / sameRun.seconds).toFixed(3), differences: byTextDiffers }))(byText),
-    differences: agree, eventLoop: loop, duckdb: duck,
+    differences: agree, eventLoop: (({ profile, ...r }) => (void profile, { ...r, differences: editorDiffers }))(loop), duckdb: duck,
   };
   const json = join(outDir, `bench-${args.quick ? 'quick' : label(size)}.json`);
   writeFileSync(json, JSON.stringify(result, null, 2) + '\n');
@@ -294,6 +319,10 @@ async function main() {
   // it proves the parallel path (ranges, merge, columns assembled in two threads) end to end.
   if (args.quick && agree.length > 0) {
     console.error(`bench: the 1- and 2-worker profiles differ in ${agree.join(', ')}`);
+    process.exitCode = 1;
+  }
+  if (args.quick && editorDiffers.length > 0) {
+    console.error(`bench: the editor worker's profile differs from the CLI's in ${editorDiffers.join(', ')}`);
     process.exitCode = 1;
   }
   if (byTextDiffers.length > 0) {

@@ -8,7 +8,7 @@ import { renderReport } from '../core/markdown';
 import { OptionError, parseBinChoice, resolveOptions, ALL_RULES, type ProfileOptions, type ProfileOptionsInput, type RuleId } from '../core/options';
 import type { Profile } from '../core/profile/types';
 import { renderText } from '../core/text/render-text';
-import { defaultWorkers, profileFileInWorkers, runWorkerIfAsked } from './parallel';
+import { defaultWorkers, profileFileInWorkers, runWorkerIfAsked } from '../worker/parallel-ranges';
 import { parseArgs, USAGE } from './parse-args';
 
 const CHUNK = 1 << 20; // 1 MiB reads: the default 64 KiB stream chunk is 2-3x slower to scan
@@ -95,7 +95,7 @@ async function main(argv: string[]): Promise<number> {
   const workers = args.workers ?? defaultWorkers(size);
   if (workers > 1) {
     try {
-      const r = await profileFileInWorkers(file, size, options, source, workers, (bytes) => progress?.update(bytes));
+      const r = await profileFileInWorkers(file, size, options, source, workers, { onProgress: (bytes) => progress?.update(bytes) });
       if ('fallback' in r) {
         if (args.workers !== undefined && !args.quiet) process.stderr.write(`assay: reading in one thread (${r.fallback})\n`);
       } else result = r;
@@ -222,7 +222,7 @@ function fail(message: string): number {
   return 2;
 }
 
-// The same bundle runs the range workers (see parallel.ts); only the main thread reads the command line.
+// The same bundle runs the range workers (see worker/parallel-ranges.ts); only the main thread reads the command line.
 if (!runWorkerIfAsked()) main(process.argv.slice(2)).then(
   (code) => {
     process.exitCode = code;

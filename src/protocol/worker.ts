@@ -50,6 +50,9 @@ export interface WireRecordIndex {
   lines: Float64Array;
 }
 
+/** The most range threads a request may ask for (more would only share the same cores). */
+export const MAX_RANGE_WORKERS = 64;
+
 /** Fields holding typed arrays (transferred rather than JSON-copied). */
 export const RECORD_INDEX_TRANSFER = ['index.offsets', 'index.lines', 'input.bytes'] as const;
 
@@ -73,6 +76,11 @@ export type HostToWorker =
       chunkBytes: number;
       /** CSV on the Web metadata the host found for the file (already read), or null. */
       metadata?: { text: string; location: string } | null;
+      /**
+       * Threads that read a file given by path in parallel byte ranges: 1 reads it in the worker
+       * alone; absent or null lets the worker choose (up to 2 on a file of 64 MB or more).
+       */
+      rangeWorkers?: number | null;
     })
   | (Addressed & { type: 'rebin'; column: string; bins: BinChoice })
   | (Addressed & { type: 'groups'; numeric: string; by: string })
@@ -85,7 +93,8 @@ export type HostToWorker =
 
 export type WorkerToHost =
   | (Addressed & { type: 'progress'; bytesRead: number; totalBytes: number | null })
-  | (Addressed & { type: 'profiled'; final: boolean; profile: Profile; index: WireRecordIndex })
+  /** `ranges`: how many byte ranges the final profile was read in (1: one pass in the worker). */
+  | (Addressed & { type: 'profiled'; final: boolean; profile: Profile; index: WireRecordIndex; ranges?: number })
   | (Addressed & { type: 'bins-result'; column: string; histogram: Histogram | null; grouped: GroupedTable | null })
   | (Addressed & { type: 'groups-result'; comparison: GroupComparison | null })
   | (Addressed & { type: 'standing-result'; column: string; standing: Standing | null })
@@ -162,6 +171,8 @@ export function isHostToWorker(m: unknown): m is HostToWorker {
     if (!((m.chunkBytes as number) >= 1)) return false;
     const meta = m.metadata;
     if (meta !== undefined && meta !== null && !(isRecord(meta) && typeof meta.text === 'string' && typeof meta.location === 'string')) return false;
+    const rw = m.rangeWorkers;
+    if (rw !== undefined && rw !== null && !(Number.isInteger(rw) && (rw as number) >= 1 && (rw as number) <= MAX_RANGE_WORKERS)) return false;
   }
   if (m.type === 'rebin' && !isBinChoice(m.bins)) return false;
   if (m.type === 'standing' && !Number.isFinite(m.value)) return false;
@@ -182,6 +193,7 @@ export function isWorkerToHost(m: unknown): m is WorkerToHost {
   if (shape === undefined || !matches(m, shape)) return false;
   if (m.type === 'failed' && !FAILURE_REASONS.includes(m.reason as string)) return false;
   if (m.type === 'standing-result' && m.standing !== null && !isStanding(m.standing)) return false;
+  if (m.type === 'profiled' && m.ranges !== undefined && !(Number.isInteger(m.ranges) && (m.ranges as number) >= 1)) return false;
   return true;
 }
 

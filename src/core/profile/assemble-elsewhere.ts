@@ -13,12 +13,17 @@ import { accumulatorBuffers } from './serialize-state';
 /** What goes to the other thread (structured-clone safe): per column, its part from each range, in file order. */
 export interface ColumnWork {
   decimalSeparator: '.' | ',';
+  /**
+   * Send each joined accumulator back with its column: a session that answers later (re-binning,
+   * comparing groups) reads the accumulators, which would otherwise stay in the other thread.
+   */
+  returnAccumulators?: boolean;
   columns: { index: number; name: string; parts: AccumulatorParts[]; ctx: Omit<ColumnContext, 'options'> & { options: unknown } }[];
 }
 
 /** What comes back: one assembled column per column sent, in the same order. */
 export interface ColumnResults {
-  columns: { index: number; assembled: Omit<AssembledColumn, 'totals'> & { totals: [RuleId, number][] } }[];
+  columns: { index: number; assembled: Omit<AssembledColumn, 'totals'> & { totals: [RuleId, number][] }; accumulator?: AccumulatorParts }[];
 }
 
 /**
@@ -56,7 +61,7 @@ export function pickColumnsToSend(ranges: JobState | readonly JobState[]): numbe
  * appends them in order, as merging would here); their accumulators here are used up (buffers
  * transferred).
  */
-export function packColumns(ranges: JobState | readonly JobState[], indices: number[]): { work: ColumnWork; transfer: ArrayBuffer[] } {
+export function packColumns(ranges: JobState | readonly JobState[], indices: number[], returnAccumulators = false): { work: ColumnWork; transfer: ArrayBuffer[] } {
   const list = Array.isArray(ranges) ? (ranges as readonly JobState[]) : [ranges as JobState];
   const st = list[0]!;
   const buffers = new Set<ArrayBuffer>();
@@ -69,12 +74,12 @@ export function packColumns(ranges: JobState | readonly JobState[], indices: num
     const { options, ...rest } = columnContext(st, index);
     return { index, name: st.names[index]!, parts, ctx: { ...rest, options: plainOptions(options) } };
   });
-  return { work: { decimalSeparator: st.dialect.decimalSeparator, columns }, transfer: [...buffers] };
+  return { work: { decimalSeparator: st.dialect.decimalSeparator, returnAccumulators, columns }, transfer: [...buffers] };
 }
 
 /** The other thread's side: rebuilds each column's accumulators, joins them in order, and assembles it. */
 export function assembleWork(work: ColumnWork): { results: ColumnResults; transfer: ArrayBuffer[] } {
-  const transfer: ArrayBuffer[] = [];
+  const transfer = new Set<ArrayBuffer>();
   const columns = work.columns.map(({ index, name, parts, ctx }) => {
     const options = resolveOptions(ctx.options as Parameters<typeof resolveOptions>[0]);
     const classifier = new CellClassifier(ctx.missingTokens, work.decimalSeparator);
@@ -84,10 +89,26 @@ export function assembleWork(work: ColumnWork): { results: ColumnResults; transf
     for (let k = 1; k < parts.length; k++) acc.append(ColumnAccumulator.fromParts(parts[k]!, classifier, limits));
     parts.length = 0;
     const a = assembleColumn(acc, name, index, { ...ctx, options });
-    for (const v of [a.rowValues, a.sorted]) if (v && v.buffer instanceof ArrayBuffer && !transfer.includes(v.buffer)) transfer.push(v.buffer);
-    return { index, assembled: { ...a, totals: [...a.totals] } };
+    for (const v of [a.rowValues, a.sorted]) if (v && v.buffer instanceof ArrayBuffer) transfer.add(v.buffer);
+    const assembled = { ...a, totals: [...a.totals] };
+    if (!work.returnAccumulators) return { index, assembled };
+    const accumulator = acc.toParts();
+    accumulatorBuffers(accumulator, transfer);
+    return { index, assembled, accumulator };
   });
-  return { results: { columns }, transfer };
+  return { results: { columns }, transfer: [...transfer] };
+}
+
+/**
+ * Puts the joined accumulators that came back (`returnAccumulators`) in place of the used-up ones
+ * in `st`, with this thread's classifier and limits (made from the same options).
+ */
+export function adoptAccumulators(results: ColumnResults, st: JobState): void {
+  for (const { index, accumulator } of results.columns) {
+    if (!accumulator) continue;
+    const old = st.columns[index]!;
+    st.columns[index] = ColumnAccumulator.fromParts(accumulator, old.classifier, old.limits);
+  }
 }
 
 /** The results as `assembleProfile`'s `preassembled` entries. */

@@ -35,12 +35,15 @@ export function columnContext(st: JobState, i: number): ColumnContext {
 }
 
 /**
- * The profile of an ended job. `preassembled` holds columns already assembled elsewhere (another
- * thread, from the same accumulator: the same result); the others are assembled here.
+ * The profile of an ended job. `preassembled` holds columns already assembled (from the same
+ * accumulator: the same result); the others are assembled here. `elsewhere`: those of them
+ * assembled in another thread, whose accumulators here are used up (all of them unless told).
  */
 export function assembleProfile(
   st: JobState, read: ((offset: number, length: number) => Uint8Array) | null, preassembled: ReadonlyMap<number, AssembledColumn> | null = null,
+  elsewhere: ReadonlySet<number> | null = null,
 ): ProfileResult {
+  const usedUp = (i: number): boolean => (elsewhere ? elsewhere.has(i) : preassembled?.has(i) ?? false);
   const { options, records } = st;
   const offsets = records.offsets.view().slice();
   const lines = records.lines.view().slice();
@@ -73,7 +76,7 @@ export function assembleProfile(
     allPending.push({ column, flags: pending, totals });
     if (rowValues && sorted) typed.set(name, { sorted, rowValues, numeric: column.type === 'integer' || column.type === 'decimal' });
     // Only a column assembled here: one assembled in another thread left its sketch there.
-    if (acc.valueSketch && column.approximate && column.stats && !preassembled?.has(i)) {
+    if (acc.valueSketch && column.approximate && column.stats && !usedUp(i)) {
       sketched.set(name, { vs: acc.valueSketch, numeric: column.type === 'integer' || column.type === 'decimal', level: column.level, integer: acc.counts.decimal === 0, items: null });
     }
   });

@@ -23,6 +23,8 @@ export class WorkerRequestError extends Error {
 export interface HostProfileResult {
   profile: Profile;
   index: WireRecordIndex;
+  /** Byte ranges the exact profile was read in by parallel threads (absent for a first pass). */
+  ranges?: number;
 }
 
 export interface ProfileHandlers {
@@ -88,7 +90,7 @@ export class WorkerClient implements Disposable {
     const result = this.request<Extract<WorkerToHost, { type: 'profiled' }>>({ ...request, type: 'profile', id }, this.options.stallTimeoutMs, true, (m) => {
       if (m.type === 'progress') handlers.onProgress?.(m.bytesRead, m.totalBytes);
       else if (m.type === 'profiled' && !m.final) handlers.onFirstPass?.({ profile: m.profile, index: m.index });
-    }, (m) => m.type === 'profiled' && m.final).then((m) => ({ profile: m.profile, index: m.index }));
+    }, (m) => m.type === 'profiled' && m.final).then((m) => ({ profile: m.profile, index: m.index, ranges: m.ranges ?? 1 }));
     return { id, result, cancel: () => this.cancel(id) };
   }
 

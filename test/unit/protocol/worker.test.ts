@@ -24,6 +24,8 @@ const profile: Profile = {
 const hostMessages: HostToWorker[] = [
   { type: 'profile', id: 1, ...at, name: 'a.csv', size: 4, options: wire, input: { kind: 'text', text: 'a\n1\n' }, firstPass: null, chunkBytes: 1 << 20 },
   { type: 'profile', id: 2, ...at, name: null, size: null, options: wire, input: { kind: 'path', path: '/data/a.csv' }, firstPass: 20_000, chunkBytes: 65_536 },
+  { type: 'profile', id: 9, ...at, name: null, size: null, options: wire, input: { kind: 'path', path: '/data/a.csv' }, firstPass: null, chunkBytes: 65_536, rangeWorkers: 2 },
+  { type: 'profile', id: 10, ...at, name: null, size: null, options: wire, input: { kind: 'path', path: '/data/a.csv' }, firstPass: null, chunkBytes: 65_536, rangeWorkers: null },
   { type: 'rebin', id: 3, ...at, column: 'x', bins: { rule: 'sturges' } },
   { type: 'rebin', id: 4, ...at, column: 'x', bins: { rule: 'count', count: 12 } },
   { type: 'rebin', id: 5, ...at, column: 'x', bins: { rule: 'width', width: 2.5 } },
@@ -76,6 +78,7 @@ describe('protocol/worker JSON round trip', () => {
       expect(cloned).toEqual(m);
       expect(isWorkerToHost(cloned)).toBe(true);
       expect([...index.offsets]).toEqual([2, 4]);
+      expect(isWorkerToHost({ ...m, ranges: 2 })).toBe(true);
     }
     expect(RECORD_INDEX_TRANSFER).toEqual(['index.offsets', 'index.lines', 'input.bytes']);
   });
@@ -106,6 +109,10 @@ describe('protocol/worker guards', () => {
     ['a zero chunk size', { ...hostMessages[0], chunkBytes: 0 }],
     ['a standing of a value that is not finite', { type: 'standing', id: 1, ...at, column: 'x', value: Infinity }],
     ['a standing of a string value', { type: 'standing', id: 1, ...at, column: 'x', value: '3' }],
+    ['zero range workers', { ...hostMessages[1], rangeWorkers: 0 }],
+    ['a fraction of a range worker', { ...hostMessages[1], rangeWorkers: 1.5 }],
+    ['more range workers than MAX_RANGE_WORKERS', { ...hostMessages[1], rangeWorkers: 65 }],
+    ['range workers as a string', { ...hostMessages[1], rangeWorkers: '2' }],
   ])('host → worker refuses %s', (_what, m) => {
     expect(isHostToWorker(m)).toBe(false);
   });
@@ -115,6 +122,8 @@ describe('protocol/worker guards', () => {
     ['a profiled index of plain arrays', { ...profiled(true), index: { offsets: [1], lines: [1] } }],
     ['a progress without totalBytes', { type: 'progress', id: 1, ...at, bytesRead: 1 }],
     ['a standing without its counts', { type: 'standing-result', id: 1, ...at, column: 'x', standing: { percentile: 50 } }],
+    ['a profiled reply read in zero ranges', { ...profiled(true), ranges: 0 }],
+    ['a profiled reply read in a fraction of a range', { ...profiled(true), ranges: 1.5 }],
     ['a standing with a negative rank error', { type: 'standing-result', id: 1, ...at, column: 'x', standing: { below: 1, equal: 0, n: 2, percentile: 50, rankError: -1 } }],
   ])('worker → host refuses %s', (_what, m) => {
     expect(isWorkerToHost(m)).toBe(false);

@@ -1,16 +1,18 @@
-// Profiles one file with several worker threads: each reads and profiles one byte range (cut at a
-// record start, see plan-ranges.ts) and sends back its state; the main thread merges the states in
-// file order and assembles the profile. The workers run this same bundle (dist/cli.js), started
-// with `workerData` that says which range to read.
+// Profiles one file on disk with several worker threads: each reads and profiles one byte range
+// (cut at a record start, see plan-ranges.ts) and sends back its state; this thread merges the
+// states in file order and assembles the profile. Both Node shells use it: the CLI (dist/cli.js)
+// and the editor's profiling worker (dist/worker.js). The workers run the bundle that started them
+// (`__filename`), with `workerData` that says which range to read; each shell calls
+// `runWorkerIfAsked` first.
 import { closeSync, openSync, readSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { isMainThread, parentPort, Worker, workerData } from 'node:worker_threads';
 import type { JobSource, ProfileResult } from '../core/engine';
 import { resolveOptions, type ProfileOptions } from '../core/options';
 import { assembleColumn, type AssembledColumn } from '../core/profile/assemble-column';
-import { assembleWork, packColumns, pickColumnsToSend, unpackResults, type ColumnResults, type ColumnWork } from '../core/profile/assemble-elsewhere';
+import { adoptAccumulators, assembleWork, packColumns, pickColumnsToSend, unpackResults, type ColumnResults, type ColumnWork } from '../core/profile/assemble-elsewhere';
 import { assembleProfile, columnContext } from '../core/profile/assemble-profile';
-import { RangeJob, type RangePlan } from '../core/profile/job';
+import { RangeJob, type JobState, type RangePlan } from '../core/profile/job';
 import { joinRangeStates } from '../core/profile/join-range-states';
 import { planRanges, type RangeTask } from '../core/profile/plan-ranges';
 import { deserializeState, serializeState, type SerializedState } from '../core/profile/serialize-state';
@@ -38,26 +40,67 @@ type WorkerReply =
   | { type: 'done'; state: SerializedState; invalidUtf8: number }
   | { type: 'error'; message: string };
 
-/** What the profile-in-a-worker mode (used by the benchmark) sends back. */
-export type ProfileReply = { type: 'profile'; profile: ProfileResult['profile']; workers: number } | { type: 'error'; message: string };
+/** What a run of profileFileInWorkers may be given besides the file. */
+export interface RangeRunOptions {
+  /** Bytes read so far over all ranges (each range reports every PROGRESS_STEP bytes). */
+  onProgress?: (bytes: number) => void;
+  /** Aborting stops every worker of the run at once; the run then rejects with RangesCancelled. */
+  signal?: AbortSignal;
+  /**
+   * Keep what the result's session reads (the editor keeps the session: re-binning, placing a
+   * value and comparing groups by any column read the joined accumulators): the columns assembled
+   * in another thread send their accumulators back, and a column that keeps a rank sketch is
+   * assembled here (the session re-bins it from the sketch). The CLI needs no session.
+   */
+  session?: boolean;
+}
+
+/** The run was aborted (RangeRunOptions.signal): its workers were stopped, nothing was profiled. */
+export class RangesCancelled extends Error {
+  constructor() {
+    super('the parallel profile was cancelled');
+  }
+}
+
+/** The workers of one run, so that a cancelled or failed run stops them all. */
+class Crew {
+  private readonly live = new Set<Worker>();
+  start(data: unknown): Worker {
+    const worker = new Worker(__filename, { workerData: data });
+    this.live.add(worker);
+    worker.once('exit', () => this.live.delete(worker));
+    return worker;
+  }
+  stopAll(): void {
+    for (const w of this.live) void w.terminate();
+    this.live.clear();
+  }
+}
 
 /**
- * Profiles `file` in `workers` ranges. Returns the result, or `{ fallback }` with the reason when
- * the file cannot be split exactly (then profile it in one pass).
+ * Profiles `file` in up to `workers` ranges (fewer when the file is small). Returns the result with
+ * the number of ranges read, or `{ fallback }` with the reason when the file cannot be split
+ * exactly (then profile it in one pass).
  */
 export async function profileFileInWorkers(
-  file: string, size: number, options: ProfileOptions, source: JobSource, workers: number, onProgress?: (bytes: number) => void,
-): Promise<ProfileResult | { fallback: string }> {
+  file: string, size: number, options: ProfileOptions, source: JobSource, workers: number, run: RangeRunOptions = {},
+): Promise<(ProfileResult & { ranges: number }) | { fallback: string }> {
+  const { onProgress, signal } = run;
+  if (signal?.aborted) throw new RangesCancelled();
+  const crew = new Crew();
+  const stop = (): void => crew.stopAll();
+  signal?.addEventListener('abort', stop);
   const fd = openSync(file, 'r');
   try {
     const read = (offset: number, length: number): Uint8Array => readAt(fd, offset, Math.max(0, Math.min(length, size - offset)));
     const plan = planRanges(read, size, options, source, workers);
     if ('fallback' in plan) return plan;
     const done = new Array<number>(plan.tasks.length).fill(0);
-    const replies = await Promise.all(plan.tasks.map((task, k) => runRange({ file, task }, (bytes) => {
+    const replies = await Promise.all(plan.tasks.map((task, k) => runRange(crew, { file, task }, (bytes) => {
       done[k] = bytes;
       onProgress?.(done.reduce((a, b) => a + b, 0));
     })));
+    if (signal?.aborted) throw new RangesCancelled();
     // One pass reports where the first ill-formed byte is; rare enough to leave to one pass.
     if (replies.some((r) => r.invalidUtf8 > 0)) return { fallback: 'the file holds bytes that are not valid UTF-8' };
     // The replies must not keep the ranges' arrays alive while they merge: each is let go as it is copied.
@@ -67,9 +110,9 @@ export async function profileFileInWorkers(
     let remote: Promise<ColumnResults> | null = null;
     let sent: ReadonlySet<number> = new Set();
     const merged = joinRangeStates(states, (ranges) => {
-      sent = new Set(pickColumnsToSend(ranges));
+      sent = new Set(pickColumnsToSend(ranges).filter((i) => !(run.session && sketched(ranges, i))));
       if (sent.size > 0) {
-        const p = assembleElsewhere(packColumns(ranges, [...sent]));
+        const p = assembleElsewhere(crew, packColumns(ranges, [...sent], run.session ?? false));
         // Awaited below; this only keeps a failure there from counting as unhandled meanwhile.
         p.catch(() => undefined);
         remote = p;
@@ -81,31 +124,58 @@ export async function profileFileInWorkers(
     merged.columns.forEach((acc, i) => {
       if (!sent.has(i)) pre.set(i, assembleColumn(acc, merged.names[i]!, i, columnContext(merged, i)));
     });
-    if (remote) for (const [i, a] of unpackResults(await remote)) pre.set(i, a);
+    if (remote) {
+      const results = await (remote as Promise<ColumnResults>);
+      for (const [i, a] of unpackResults(results)) pre.set(i, a);
+      adoptAccumulators(results, merged);
+    }
+    if (signal?.aborted) throw new RangesCancelled();
     const bom = merged.bomLength;
-    return assembleProfile(merged, (offset, length) => read(offset + bom, length), pre);
+    return { ...assembleProfile(merged, (offset, length) => read(offset + bom, length), pre, sent), ranges: plan.tasks.length };
+  } catch (e) {
+    // A worker stopped by the abort fails its promise: report the abort, not its symptom.
+    if (signal?.aborted) throw new RangesCancelled();
+    throw e;
   } finally {
+    signal?.removeEventListener('abort', stop);
+    crew.stopAll();
     closeSync(fd);
   }
 }
 
+/** Whether column `i` keeps (or, joined, will keep) a rank sketch instead of its values. */
+function sketched(ranges: readonly JobState[], i: number): boolean {
+  let values = 0;
+  for (const st of ranges) {
+    const acc = st.columns[i]!;
+    if (acc.valueSketch) return true;
+    values += acc.valueCount;
+  }
+  return values > (ranges[0]?.options.exactValuesLimit ?? Infinity);
+}
+
 /** Joins and assembles the packed columns in a worker thread: the same code on the same data as here. */
-function assembleElsewhere({ work, transfer }: { work: ColumnWork; transfer: ArrayBuffer[] }): Promise<ColumnResults> {
+function assembleElsewhere(crew: Crew, { work, transfer }: { work: ColumnWork; transfer: ArrayBuffer[] }): Promise<ColumnResults> {
   return new Promise<ColumnResults>((resolve, reject) => {
-    const worker = new Worker(__filename, { workerData: { assayAssemble: true } });
+    const worker = crew.start({ assayAssemble: true });
+    let settled = false;
     worker.once('message', (m: { type: 'assembled'; results: ColumnResults } | { type: 'error'; message: string }) => {
+      settled = true;
       void worker.terminate();
       if (m.type === 'assembled') resolve(m.results);
       else reject(new Error(m.message));
     });
     worker.once('error', reject);
+    worker.once('exit', (code) => {
+      if (!settled) reject(new Error(`worker: exited with code ${code} before sending its columns`));
+    });
     worker.postMessage(work, transfer);
   });
 }
 
-function runRange(request: RangeRequest, onProgress: (bytes: number) => void): Promise<{ state: SerializedState; invalidUtf8: number }> {
+function runRange(crew: Crew, request: RangeRequest, onProgress: (bytes: number) => void): Promise<{ state: SerializedState; invalidUtf8: number }> {
   return new Promise((resolve, reject) => {
-    const worker = new Worker(__filename, { workerData: { assayRange: request } });
+    const worker = crew.start({ assayRange: request });
     let settled = false;
     worker.on('message', (m: WorkerReply) => {
       if (m.type === 'progress') onProgress(m.bytes);
@@ -169,13 +239,13 @@ function profileRange(request: RangeRequest, onProgress: (bytes: number) => void
 }
 
 /**
- * Runs the worker side when this bundle was started as a worker thread; returns false in the main
- * thread. Two modes: `assayRange` (one range, for profileFileInWorkers) and `assayProfile` (a whole
- * file with its own range workers, posting the profile: how an extension host would use it).
+ * Runs the worker side when this bundle was started as a range or assembly thread of
+ * profileFileInWorkers (`assayRange`: read one range; `assayAssemble`: join and assemble the
+ * columns posted to it); returns false otherwise (the shell then runs as itself).
  */
 export function runWorkerIfAsked(): boolean {
   if (isMainThread || parentPort === null) return false;
-  const data = workerData as { assayRange?: RangeRequest; assayProfile?: { file: string; size: number; workers: number }; assayAssemble?: true } | null;
+  const data = workerData as { assayRange?: RangeRequest; assayAssemble?: true } | null;
   const port = parentPort;
   if (data?.assayAssemble) {
     port.once('message', (work: ColumnWork) => {
@@ -195,18 +265,6 @@ export function runWorkerIfAsked(): boolean {
     } catch (e) {
       port.postMessage({ type: 'error', message: e instanceof Error ? e.message : String(e) } satisfies WorkerReply);
     }
-    return true;
-  }
-  if (data?.assayProfile) {
-    const { file, size, workers } = data.assayProfile;
-    const options = resolveOptions({});
-    profileFileInWorkers(file, size, options, { name: file, size }, workers).then(
-      (r) => {
-        if ('fallback' in r) port.postMessage({ type: 'error', message: `not split: ${r.fallback}` } satisfies ProfileReply);
-        else port.postMessage({ type: 'profile', profile: r.profile, workers } satisfies ProfileReply);
-      },
-      (e: unknown) => port.postMessage({ type: 'error', message: e instanceof Error ? e.message : String(e) } satisfies ProfileReply),
-    );
     return true;
   }
   return false;
