@@ -294,6 +294,11 @@ export class ColumnAccumulator {
     this.dense = null;
   }
 
+  /** Bytes each row takes in the per-row arrays it has now (kind, value, code). */
+  bytesPerRow(): number {
+    return 1 + (this.values ? 8 : 0) + (this.codes ? this.codes.data.BYTES_PER_ELEMENT : 0);
+  }
+
   /** Makes room for `rows` rows in the per-row arrays it has (see RangePlan.expectedBytes). */
   reserve(rows: number): void {
     this.kinds.reserve(rows);
@@ -581,7 +586,8 @@ export class ColumnAccumulator {
     }
     const counts = this.categoryCounts;
     const out = new GrowableCodes();
-    out.reserve(rows);
+    // The room the per-row arrays have (for ranges still to be appended: see RangePlan.appendBytes).
+    out.reserve(Math.max(rows, this.kinds.data.length));
     for (let r = 0; r < rows; r++) {
       const c = codes[r]!;
       if (c >= 0) counts[c]! += 1;

@@ -97,6 +97,14 @@ export interface RangePlan {
    * whole range at once instead of doubling (each doubling copies them and touches new pages).
    */
   expectedBytes?: number;
+  /**
+   * Bytes of the later ranges that will be appended to this one (the first range of a split):
+   * its per-row arrays are sized for their rows too, where the memory ceiling allows, so that the
+   * join writes them into room already there instead of allocating the joined arrays and copying
+   * both halves (pages never written are never resident). The duplicate-record table is not: a
+   * join probes it rather than appending to it.
+   */
+  appendBytes?: number;
 }
 
 /** Bytes read before the per-row arrays are sized from the bytes per record seen so far. */
@@ -122,6 +130,8 @@ export class RangeJob {
   private batch: CellBatch | null = null;
   /** See RangePlan.expectedBytes; 0 once the arrays were sized (or when it is not known). */
   private expectedBytes: number;
+  /** See RangePlan.appendBytes. */
+  private readonly appendBytes: number;
 
   constructor(plan: RangePlan) {
     const bd = byteDialect({ delimiter: plan.dialect.delimiter, quote: plan.dialect.quote });
@@ -130,6 +140,7 @@ export class RangeJob {
     this.headerPending = plan.names === null;
     this.startOffset = plan.startOffset;
     this.expectedBytes = plan.expectedBytes ?? 0;
+    this.appendBytes = plan.appendBytes ?? 0;
     this.state = {
       options, source: plan.source, encoding: plan.encoding, bom: plan.bomLength > 0, bomLength: plan.bomLength,
       dialect: plan.dialect, byteDialect: bd, names: [], headerNotes: [], notices: [], columns: [],
@@ -204,11 +215,18 @@ export class RangeJob {
     // Sized past the memory ceiling, the arrays would stop reading at once; growing, they stop it
     // only where the records really need more.
     const limit = st.options.memoryLimitBytes;
-    if (limit !== null && this.heldBytes() * (rows / rec.rows) > limit) return;
-    rec.offsets.ensure(rows, true);
-    rec.lines.ensure(rows, true);
+    const estimate = this.heldBytes() * (rows / rec.rows);
+    if (limit !== null && estimate > limit) return;
+    // Room for the ranges to be appended too (their rows at this range's bytes per record), where
+    // the ceiling allows it with that room's bytes on top of this range's estimate.
+    const later = st.options.maxRecords === null && this.appendBytes > 0 ? Math.ceil(rows * ((expected + this.appendBytes) / expected)) : rows;
+    let perRow = 16; // offset and line
+    for (const c of st.columns) perRow += c.bytesPerRow();
+    const room = later > rows && (limit === null || estimate + perRow * (later - rows) <= limit) ? later : rows;
+    rec.offsets.ensure(room, true);
+    rec.lines.ensure(room, true);
     rec.seen.reserve(rows);
-    for (const c of st.columns) c.reserve(rows);
+    for (const c of st.columns) c.reserve(room);
   }
 
   /** Adds the batched cells to the columns; the current chunk may go after this. */

@@ -54,7 +54,8 @@ export function planRanges(
   const tasks = cuts.map((from, i): RangeTask => ({
     from,
     to: cuts[i + 1] ?? size,
-    plan: { options: rangeOptions, source, encoding: 'utf-8', bomLength: bom, dialect, names: i === 0 ? null : names, startOffset: from - bom, declared: null, expectedBytes: (cuts[i + 1] ?? size) - from },
+    plan: { options: rangeOptions, source, encoding: 'utf-8', bomLength: bom, dialect, names: i === 0 ? null : names, startOffset: from - bom, declared: null,
+      expectedBytes: (cuts[i + 1] ?? size) - from, ...(i === 0 && cuts.length > 1 ? { appendBytes: size - (cuts[1] ?? size) } : {}) },
   }));
   return { tasks };
 }

@@ -76,9 +76,10 @@ export function deserializeState(data: SerializedState): JobState {
   };
 }
 
+/** The sent entries, with the room their buffer has past them (see RangePlan.appendBytes: a join fills it in place). */
 function growable(a: Float64Array): GrowableFloat64 {
   const g = new GrowableFloat64(1);
-  g.data = a;
+  g.data = a.byteOffset === 0 && a.buffer instanceof ArrayBuffer ? new Float64Array(a.buffer) : a;
   g.length = a.length;
   return g;
 }
