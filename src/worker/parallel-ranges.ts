@@ -29,7 +29,7 @@ export function defaultWorkers(size: number): number {
   return size < PARALLEL_FROM_BYTES ? 1 : Math.max(1, Math.min(2, availableParallelism()));
 }
 
-interface RangeRequest {
+export interface RangeRequest {
   file: string;
   task: RangeTask;
 }
@@ -96,15 +96,26 @@ export async function profileFileInWorkers(
     const plan = planRanges(read, size, options, source, workers);
     if ('fallback' in plan) return plan;
     const done = new Array<number>(plan.tasks.length).fill(0);
+    // One pass reports where the first ill-formed byte is, so such a file is read again in one pass:
+    // the first range to meet one stops there, and the others are stopped at once.
+    let invalid = false;
     const replies = await Promise.all(plan.tasks.map((task, k) => runRange(crew, { file, task }, (bytes) => {
       done[k] = bytes;
       onProgress?.(done.reduce((a, b) => a + b, 0));
+    }).then((r) => {
+      if (r.invalidUtf8 > 0 && !invalid) {
+        invalid = true;
+        crew.stopAll();
+      }
+      return r;
+    }, (e: unknown) => {
+      if (invalid) return null;
+      throw e;
     })));
     if (signal?.aborted) throw new RangesCancelled();
-    // One pass reports where the first ill-formed byte is; rare enough to leave to one pass.
-    if (replies.some((r) => r.invalidUtf8 > 0)) return { fallback: 'the file holds bytes that are not valid UTF-8' };
+    if (invalid) return { fallback: 'the file holds bytes that are not valid UTF-8' };
     // The replies must not keep the ranges' arrays alive while they merge: each is let go as it is copied.
-    const states = replies.splice(0).map((r) => deserializeState(r.state));
+    const states = replies.splice(0).map((r) => deserializeState(r!.state));
     // About half of the columns (by estimated work) are joined and assembled in another thread while
     // this one joins the records and the other columns and assembles those.
     let remote: Promise<ColumnResults> | null = null;
@@ -207,8 +218,12 @@ function readAt(fd: number, offset: number, length: number): Uint8Array {
   return buf.subarray(0, got);
 }
 
-/** Profiles one range in this (worker) thread and returns its state for transfer. */
-function profileRange(request: RangeRequest, onProgress: (bytes: number) => void): { data: SerializedState; transfer: ArrayBuffer[]; invalidUtf8: number } {
+/**
+ * Profiles one range in this (worker) thread and returns its state for transfer. It stops at the
+ * chunk where it meets bytes that are not UTF-8 (`invalidUtf8` > 0; that chunk is not profiled):
+ * the file is then read again in one pass, and this state is not used.
+ */
+export function profileRange(request: RangeRequest, onProgress: (bytes: number) => void): { data: SerializedState; transfer: ArrayBuffer[]; invalidUtf8: number } {
   const { file, task } = request;
   const plan: RangePlan = { ...task.plan, options: resolveOptions(task.plan.options) };
   const job = new RangeJob(plan);
@@ -224,6 +239,7 @@ function profileRange(request: RangeRequest, onProgress: (bytes: number) => void
       if (n === 0) break;
       const chunk = buf.subarray(0, n);
       check.push(chunk);
+      if (check.invalid > 0) break;
       job.push(chunk);
       at += n;
       if (at - task.from - reported >= PROGRESS_STEP) {

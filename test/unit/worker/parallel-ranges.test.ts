@@ -6,13 +6,15 @@
 // in the worker meanwhile; a cancelled read stops. The file is generated here (seeded), with quoted
 // line breaks, doubled quotes, missing cells and repeated records, so that the cut between ranges
 // has to be quote-aware.
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { mean } from 'd3-array';
 import * as esbuild from 'esbuild';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { resolveOptions } from '../../../src/core/options';
+import { planRanges } from '../../../src/core/profile/plan-ranges';
+import { profileRange } from '../../../src/worker/parallel-ranges';
 import { toWireOptions, type WorkerToHost } from '../../../src/protocol/worker';
 import { nodeWorkerPort } from '../../../src/extension/worker/node-worker-port';
 import { WorkerClient, type ProfileRequest } from '../../../src/extension/worker/worker-client';
@@ -21,6 +23,8 @@ const root = join(__dirname, '../../..');
 const dir = mkdtempSync(join(tmpdir(), 'assay-ranges-'));
 const script = join(dir, 'worker.js');
 const file = join(dir, 'deliveries.csv');
+/** The same records with one byte that is not UTF-8 (0xFF, in a note) three quarters of the way in. */
+const badFile = join(dir, 'deliveries-bad.csv');
 const RECORDS = 40_000;
 const readings: number[] = [];
 
@@ -55,6 +59,10 @@ function generate(): string {
 
 beforeAll(async () => {
   writeFileSync(file, generate());
+  const bytes = new Uint8Array(readFileSync(file));
+  const at = bytes.indexOf(0x6f, Math.floor(bytes.length * 0.75)); // an "o" of "ok"
+  bytes[at] = 0xff;
+  writeFileSync(badFile, bytes);
   await esbuild.build({ entryPoints: [join(root, 'src/worker/main-node.ts')], outfile: script, bundle: true, platform: 'node', format: 'cjs', target: 'node20', logLevel: 'silent' });
 }, 60_000);
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
@@ -129,6 +137,36 @@ describe('parallel byte ranges in the editor\'s worker', () => {
       client.dispose();
     }
   }, 120_000);
+
+  it('reads a file with bytes that are not UTF-8 again in one pass, which says where they are', async () => {
+    const client = new WorkerClient(() => nodeWorkerPort(script));
+    try {
+      const two = await client.profile(request('file:///bad2.csv', { input: { kind: 'path', path: badFile }, rangeWorkers: 2 })).result;
+      const one = await client.profile(request('file:///bad1.csv', { input: { kind: 'path', path: badFile }, rangeWorkers: 1 })).result;
+      expect(two.ranges).toBe(1);
+      expect(two.profile).toEqual(one.profile);
+      // One U+FFFD for the lone 0xFF (WHATWG Encoding Standard, "maximal subpart"), and the line is named.
+      const notice = two.profile.notices.find((n) => n.code === 'invalid-utf8');
+      expect(notice?.message).toMatch(/^1 byte sequence in the file is not valid UTF-8/);
+      expect(notice?.line).toBeGreaterThan(1);
+    } finally {
+      client.dispose();
+    }
+  }, 120_000);
+
+  it('a range stops reading at the chunk where it meets bytes that are not UTF-8', () => {
+    const bytes = new Uint8Array(readFileSync(badFile));
+    const plan = planRanges((o, l) => bytes.subarray(o, o + l), bytes.length, resolveOptions({}), { name: null }, 2);
+    if ('fallback' in plan) throw new Error(plan.fallback);
+    const task = plan.tasks[1]!;
+    const r = profileRange({ file: badFile, task }, () => undefined);
+    expect(r.invalidUtf8).toBe(1);
+    // The chunk that holds the bad byte is not profiled, nor anything after it.
+    expect(r.data.rest.bytes).toBeLessThan(task.to - task.from);
+    const clean = profileRange({ file, task }, () => undefined);
+    expect(clean.invalidUtf8).toBe(0);
+    expect(clean.data.rest.bytes).toBe(task.to - task.from);
+  });
 
   it('a cancelled parallel read ends as cancelled, and the worker then answers the next job', async () => {
     const port = nodeWorkerPort(script);
