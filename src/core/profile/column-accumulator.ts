@@ -1006,12 +1006,7 @@ export class ColumnAccumulator {
       this.hll.merge(other.hll);
       this.reduceToCounters();
     } else if (this.codes && other.codes) {
-      const oc = other.codes;
-      this.codes.reserve(this.codes.length + oc.length);
-      for (let j = 0; j < oc.length; j++) {
-        const c = oc.get(j);
-        this.codes.push(c < 0 ? -1 : remap[c] ?? -1);
-      }
+      this.codes.appendMapped(other.codes, remap);
     }
     other.codes = null;
     for (let t = 0; t < MAX_TOKENS; t++) this.tokenCounts[t]! += other.tokenCounts[t]!;

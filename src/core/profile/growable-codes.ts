@@ -36,6 +36,32 @@ export class GrowableCodes {
     if (n > this.data.length) this.grow(n);
   }
 
+  /**
+   * Appends `src`'s codes, each code c as `remap[c]` (-1, or a code past `remap`, as -1): how a
+   * later range's codes join this one's dictionary. One pass over typed arrays, widened once.
+   * @example a.appendMapped(b, Int32Array.of(2, 0)) // b's codes 0, 1, -1 are appended as 2, 0, -1
+   */
+  appendMapped(src: GrowableCodes, remap: ArrayLike<number>): void {
+    const s = src.data;
+    const n = src.length;
+    let top = 0;
+    for (let j = 0; j < n; j++) if (s[j]! > top) top = s[j]!;
+    // Stored values (code + 1) -> stored values; 0 stays 0 (no code).
+    const table = new Int32Array(top + 1);
+    let max = 0;
+    for (let v = 1; v <= top; v++) {
+      const m = v - 1 < remap.length ? remap[v - 1]! + 1 : 0;
+      table[v] = m > 0 ? m : 0;
+      if (m > max) max = m;
+    }
+    if (max > this.max) this.widen(max);
+    this.reserve(this.length + n);
+    const d = this.data;
+    const at = this.length;
+    for (let j = 0; j < n; j++) d[at + j] = table[s[j]!]!;
+    this.length = at + n;
+  }
+
   /** Takes over stored data (code + 1 per row), e.g. from another thread. */
   adopt(data: Uint8Array | Uint16Array | Int32Array, length: number): void {
     this.data = data;

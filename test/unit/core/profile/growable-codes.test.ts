@@ -27,4 +27,24 @@ describe('GrowableCodes', () => {
       { numRuns: 40 },
     );
   });
+
+  it('appends codes through a remap as pushing each mapped code would (the documented example, then generated)', () => {
+    const a = new GrowableCodes();
+    const b = new GrowableCodes();
+    for (const x of [0, 1, -1]) b.push(x);
+    a.appendMapped(b, Int32Array.of(2, 0));
+    expect([...a.view()]).toEqual([2, 0, -1]);
+    const code = fc.oneof(fc.integer({ min: -1, max: 40 }), fc.integer({ min: -1, max: 70_000 }));
+    fc.assert(
+      fc.property(fc.array(code, { maxLength: 400 }), fc.array(code, { maxLength: 400 }), fc.array(fc.integer({ min: -1, max: 100_000 }), { maxLength: 60 }), (mine, theirs, remap) => {
+        const x = new GrowableCodes();
+        for (const c of mine) x.push(c);
+        const y = new GrowableCodes();
+        for (const c of theirs) y.push(c);
+        x.appendMapped(y, remap);
+        // Oracle: the loop this replaces (a code past the remap maps to -1).
+        expect([...x.view()]).toEqual([...mine, ...theirs.map((c) => (c < 0 ? -1 : remap[c] ?? -1))]);
+      }),
+    );
+  });
 });
