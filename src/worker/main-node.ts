@@ -5,11 +5,11 @@ import { nodeFileSource } from './node-file-source';
 import { defaultWorkers, profileFileInWorkers, runWorkerIfAsked } from './parallel-ranges';
 import { ProfileService, type RangeProfiler } from './profile-service';
 
-/** Parallel ranges where they pay (see defaultWorkers), keeping what the session reads. */
+/** Parallel ranges where they pay (see defaultWorkers), keeping what the session reads, in threads that let the editor have the cores first. */
 const ranges: RangeProfiler = {
   threads: (size, requested) => requested ?? defaultWorkers(size),
   async profile({ path, size, options, source, threads, onProgress, signal }) {
-    const r = await profileFileInWorkers(path, size, options, source, threads, { onProgress, signal, session: true });
+    const r = await profileFileInWorkers(path, size, options, source, threads, { onProgress, signal, session: true, yieldCores: true });
     return 'fallback' in r ? null : { result: r, ranges: r.ranges };
   },
 };

@@ -5,7 +5,7 @@
 // (`__filename`), with `workerData` that says which range to read; each shell calls
 // `runWorkerIfAsked` first.
 import { closeSync, openSync, readSync } from 'node:fs';
-import { availableParallelism } from 'node:os';
+import { availableParallelism, setPriority } from 'node:os';
 import { isMainThread, parentPort, Worker, workerData } from 'node:worker_threads';
 import type { JobSource, ProfileResult } from '../core/engine';
 import { resolveOptions, type ProfileOptions } from '../core/options';
@@ -21,6 +21,8 @@ import { Utf8Validator } from '../core/read/utf8-validator';
 /** Files below this size are profiled in one thread by default: starting workers costs more than it saves. */
 export const PARALLEL_FROM_BYTES = 64 * 1024 * 1024;
 const CHUNK = 1 << 20;
+/** The nice value of threads that yield the cores (RangeRunOptions.yieldCores): 10 is what `nice` gives by default. */
+const YIELDING_NICE = 10;
 /** A worker reports progress after this many bytes. */
 const PROGRESS_STEP = 32 << 20;
 
@@ -53,6 +55,13 @@ export interface RangeRunOptions {
    * assembled here (the session re-bins it from the sketch). The CLI needs no session.
    */
   session?: boolean;
+  /**
+   * Run the range and assembly threads at a lower priority (nice 10), so that the threads that did
+   * not start them (an editor's extension host, its window) keep the cores they need while a large
+   * file is read. Linux only: there a nice value belongs to one thread; elsewhere a priority is the
+   * whole process's, and it is left alone.
+   */
+  yieldCores?: boolean;
 }
 
 /** The run was aborted (RangeRunOptions.signal): its workers were stopped, nothing was profiled. */
@@ -65,8 +74,9 @@ export class RangesCancelled extends Error {
 /** The workers of one run, so that a cancelled or failed run stops them all. */
 class Crew {
   private readonly live = new Set<Worker>();
-  start(data: unknown): Worker {
-    const worker = new Worker(__filename, { workerData: data });
+  constructor(private readonly yieldCores = false) {}
+  start(data: object): Worker {
+    const worker = new Worker(__filename, { workerData: this.yieldCores ? { ...data, assayYield: true } : data });
     this.live.add(worker);
     worker.once('exit', () => this.live.delete(worker));
     return worker;
@@ -87,7 +97,7 @@ export async function profileFileInWorkers(
 ): Promise<(ProfileResult & { ranges: number }) | { fallback: string }> {
   const { onProgress, signal } = run;
   if (signal?.aborted) throw new RangesCancelled();
-  const crew = new Crew();
+  const crew = new Crew(run.yieldCores);
   const stop = (): void => crew.stopAll();
   signal?.addEventListener('abort', stop);
   const fd = openSync(file, 'r');
@@ -254,6 +264,16 @@ export function profileRange(request: RangeRequest, onProgress: (bytes: number) 
   return { ...serializeState(job.end()), invalidUtf8: check.invalid };
 }
 
+/** Lowers this thread's priority (see RangeRunOptions.yieldCores); a refusal leaves it as it was. */
+function yieldCores(): void {
+  if (process.platform !== 'linux') return;
+  try {
+    setPriority(0, YIELDING_NICE);
+  } catch {
+    // Not permitted here: the thread runs at the priority it has.
+  }
+}
+
 /**
  * Runs the worker side when this bundle was started as a range or assembly thread of
  * profileFileInWorkers (`assayRange`: read one range; `assayAssemble`: join and assemble the
@@ -261,8 +281,9 @@ export function profileRange(request: RangeRequest, onProgress: (bytes: number) 
  */
 export function runWorkerIfAsked(): boolean {
   if (isMainThread || parentPort === null) return false;
-  const data = workerData as { assayRange?: RangeRequest; assayAssemble?: true } | null;
+  const data = workerData as { assayRange?: RangeRequest; assayAssemble?: true; assayYield?: true } | null;
   const port = parentPort;
+  if (data?.assayYield && (data.assayRange || data.assayAssemble)) yieldCores();
   if (data?.assayAssemble) {
     port.once('message', (work: ColumnWork) => {
       try {

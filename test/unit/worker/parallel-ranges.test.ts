@@ -6,7 +6,8 @@
 // in the worker meanwhile; a cancelled read stops. The file is generated here (seeded), with quoted
 // line breaks, doubled quotes, missing cells and repeated records, so that the cut between ranges
 // has to be quote-aware.
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { Worker } from 'node:worker_threads';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { mean } from 'd3-array';
@@ -167,6 +168,36 @@ describe('parallel byte ranges in the editor\'s worker', () => {
     expect(clean.invalidUtf8).toBe(0);
     expect(clean.data.rest.bytes).toBe(task.to - task.from);
   });
+
+  it.runIf(process.platform === 'linux')('runs the editor\'s range threads at nice 10, so that the extension host has the cores first (Linux: a nice value per thread, proc(5))', async () => {
+    // Field 19 of /proc/PID/task/TID/stat is the nice value (proc(5)); the name in field 2 may hold spaces.
+    const niceOf = (tid: string): number | null => {
+      try {
+        const stat = readFileSync(`/proc/self/task/${tid}/stat`, 'utf8');
+        return Number(stat.slice(stat.lastIndexOf(')') + 2).split(' ')[16]);
+      } catch {
+        return null;
+      }
+    };
+    const yielding = () => readdirSync('/proc/self/task').filter((t) => niceOf(t) === 10).length;
+    const before = yielding();
+    // An assembly thread as the editor's worker starts it: it waits for its columns, at its lowered priority.
+    const w = new Worker(script, { workerData: { assayAssemble: true, assayYield: true } });
+    await new Promise((r) => w.once('online', r));
+    let after = before;
+    for (let i = 0; i < 200 && after === before; i++) {
+      await new Promise((r) => setTimeout(r, 10));
+      after = yielding();
+    }
+    await w.terminate();
+    expect(after).toBe(before + 1);
+    // The CLI's threads keep the normal priority.
+    const plain = new Worker(script, { workerData: { assayAssemble: true } });
+    await new Promise((r) => plain.once('online', r));
+    await new Promise((r) => setTimeout(r, 200));
+    expect(yielding()).toBe(before);
+    await plain.terminate();
+  }, 60_000);
 
   it('a cancelled parallel read ends as cancelled, and the worker then answers the next job', async () => {
     const port = nodeWorkerPort(script);
