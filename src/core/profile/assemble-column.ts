@@ -38,8 +38,11 @@ export interface AssembledColumn {
   totals: Map<RuleId, number>;
   /** Row-indexed typed values (NaN = none): numbers, or ms for dates; null for text/boolean. */
   rowValues: Float64Array | null;
-  /** The typed values, sorted ascending. */
-  sorted: Float64Array | null;
+  /**
+   * The least and greatest typed values, or null. The sorted values themselves are not handed on:
+   * kept for every column they would double the memory a session holds (see assembleProfile).
+   */
+  extremes: { min: number; max: number } | null;
 }
 
 /** Rules that list rows by their values, which a sketched column does not keep. */
@@ -171,17 +174,7 @@ export function assembleColumn(acc: ColumnAccumulator, name: string, index: numb
   const codes = acc.codes ? acc.codes.view() : null;
   if (rowValues && codes) sorted = sortedByCode(rowValues, codes, acc.distinct);
   if (byValue && rowValues === raw) sorted = byValue.sorted;
-  if (rowValues && !sorted) {
-    let n = 0;
-    for (let r = 0; r < rows; r++) if (!Number.isNaN(rowValues[r]!)) n++;
-    sorted = new Float64Array(n);
-    n = 0;
-    for (let r = 0; r < rows; r++) {
-      const v = rowValues[r]!;
-      if (!Number.isNaN(v)) sorted[n++] = v;
-    }
-    radixSortFloat64(sorted);
-  }
+  if (rowValues && !sorted) sorted = sortedValues(rowValues);
   let distinct: number;
   let distinctExact = true;
   if (byValue) distinct = byValue.distinct;
@@ -270,12 +263,31 @@ export function assembleColumn(acc: ColumnAccumulator, name: string, index: numb
       if (options.rules.enabled.has(rule)) column.skippedRules.push({ rule, reason: 'the column has more values than are kept exactly (exactValuesLimit), so its rows are not kept to list' });
     }
   }
+  const extremes = sorted && sorted.length > 0 ? { min: sorted[0]!, max: sorted[sorted.length - 1]! } : null;
   // Nothing reads this column's rows again unless the session keeps them (see retainValues).
   if (!keepsValues(options)) {
     acc.releaseRows();
-    return { column, pending: outcome.pending, totals: outcome.totals, rowValues: null, sorted: null };
+    return { column, pending: outcome.pending, totals: outcome.totals, rowValues: null, extremes };
   }
-  return { column, pending: outcome.pending, totals: outcome.totals, rowValues, sorted };
+  return { column, pending: outcome.pending, totals: outcome.totals, rowValues, extremes };
+}
+
+/**
+ * The non-NaN values of `rowValues`, sorted ascending (a radix sort: −0 before +0, as
+ * Float64Array.prototype.sort). The other ways to the same array (`sortedByCode`, counting by
+ * value) are shortcuts to this one.
+ */
+export function sortedValues(rowValues: Float64Array): Float64Array {
+  let n = 0;
+  for (let r = 0; r < rowValues.length; r++) if (!Number.isNaN(rowValues[r]!)) n++;
+  const sorted = new Float64Array(n);
+  n = 0;
+  for (let r = 0; r < rowValues.length; r++) {
+    const v = rowValues[r]!;
+    if (!Number.isNaN(v)) sorted[n++] = v;
+  }
+  radixSortFloat64(sorted);
+  return sorted;
 }
 
 /**

@@ -89,7 +89,7 @@ export function assembleWork(work: ColumnWork): { results: ColumnResults; transf
     for (let k = 1; k < parts.length; k++) acc.append(ColumnAccumulator.fromParts(parts[k]!, classifier, limits));
     parts.length = 0;
     const a = assembleColumn(acc, name, index, { ...ctx, options });
-    for (const v of [a.rowValues, a.sorted]) if (v && v.buffer instanceof ArrayBuffer) transfer.add(v.buffer);
+    if (a.rowValues && a.rowValues.buffer instanceof ArrayBuffer) transfer.add(a.rowValues.buffer);
     const assembled = { ...a, totals: [...a.totals] };
     if (!work.returnAccumulators) return { index, assembled };
     const accumulator = acc.toParts();

@@ -4,8 +4,9 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { resolveOptions, type ProfileOptions } from '../../../../src/core/options';
-import { sortedByCode } from '../../../../src/core/profile/assemble-column';
-import { assembleProfile } from '../../../../src/core/profile/assemble-profile';
+import { bisectLeft, bisectRight } from 'd3-array';
+import { assembleColumn, sortedByCode } from '../../../../src/core/profile/assemble-column';
+import { assembleProfile, columnContext } from '../../../../src/core/profile/assemble-profile';
 import { planDialect, RangeJob } from '../../../../src/core/profile/job';
 
 const bits = (a: Float64Array): number[] => Array.from(new Uint32Array(a.buffer, a.byteOffset, 2 * a.length));
@@ -71,3 +72,60 @@ function profileStateOf(bytes: Uint8Array, options: ProfileOptions) {
   job.push(bytes);
   return job.end();
 }
+
+describe('what the session keeps (retainValues, the editor)', () => {
+  // Numbers (a by-value column and a coded one), dates and one text column; some rows empty.
+  const rows = Array.from({ length: 3000 }, (_, i) => [
+    i % 17 === 0 ? '' : String(((i * 7919) % 1000) / 10),
+    String((i * 31) % 50),
+    `2025-${String((i % 12) + 1).padStart(2, '0')}-${String((i % 28) + 1).padStart(2, '0')}`,
+    i % 5 ? 'kiln' : 'dryer',
+  ].join(','));
+  const bytes = new TextEncoder().encode('reading,count,day,unit\n' + rows.join('\n') + '\n');
+  const read = (o: number, l: number) => bytes.subarray(o, o + l);
+
+  it('holds each typed column once: its row values, no sorted copy', () => {
+    const st = profileStateOf(bytes, resolveOptions({}));
+    for (const [i, acc] of st.columns.entries()) {
+      const a = assembleColumn(acc, st.names[i]!, i, columnContext(st, i));
+      // Every typed array the result holds, each buffer once.
+      const buffers = new Set<ArrayBufferLike>();
+      const walk = (v: unknown): void => {
+        if (ArrayBuffer.isView(v)) buffers.add(v.buffer);
+        else if (v && typeof v === 'object') for (const x of Object.values(v)) walk(x);
+      };
+      walk(a);
+      const held = [...buffers].reduce((s, b) => s + b.byteLength, 0);
+      if (a.column.type === 'text') expect(held).toBe(0);
+      else {
+        expect(a.rowValues).not.toBeNull();
+        // The row values (8 bytes a row, with room to grow) and nothing of the same size beside them.
+        expect(held).toBe(a.rowValues!.buffer.byteLength);
+        expect(held).toBeLessThan(2 * 8 * 3000);
+      }
+    }
+  });
+
+  it('answers standings and re-bins as from the sorted values (d3-array bisect; the profile\'s own histogram)', () => {
+    const { profile, session } = assembleProfile(profileStateOf(bytes, resolveOptions({})), read);
+    for (const name of ['reading', 'count']) {
+      const col = profile.columns.find((c) => c.name === name)!;
+      const values = rows.map((r) => r.split(',')[name === 'reading' ? 0 : 1]!).filter((t) => t !== '').map(Number);
+      const sorted = Float64Array.from(values).sort();
+      for (const probe of [-1, 0, 3, 12.5, 25, 49, 50, 99.9, 1000]) {
+        const below = bisectLeft(sorted, probe);
+        const equal = bisectRight(sorted, probe) - below;
+        expect(session.standing(name, probe)).toEqual({ below, equal, n: sorted.length, percentile: (100 * (below + equal / 2)) / sorted.length });
+      }
+      // The same rule again gives the histogram the profile was assembled with.
+      const again = session.rebin(name, { rule: col.histogram!.rule } as Parameters<typeof session.rebin>[1], col.histogram!.edgeMode);
+      expect(again?.histogram).toEqual(col.histogram);
+      // Another column in between, then back: the one sorted column kept is made again.
+      expect(session.rebin(name === 'reading' ? 'count' : 'reading', { rule: 'sturges' }, 'nice')?.histogram).not.toBeNull();
+      expect(session.rebin(name, { rule: 'count', count: 4 }, 'exact')?.histogram?.counts.reduce((s, c) => s + c, 0)).toBe(sorted.length);
+    }
+    const day = session.standing('day', Date.UTC(2025, 5, 15));
+    expect(day?.n).toBe(3000);
+    expect(session.standing('unit', 1)).toBeNull();
+  });
+});
