@@ -20,14 +20,19 @@ const request = (uri: string): ProfileRequest => ({
   input: { kind: 'text', text }, firstPass: null, chunkBytes: 256,
 });
 
-/** A worker in process: messages cross asynchronously both ways, as between threads. */
+/**
+ * A worker in process: messages cross asynchronously both ways, as between threads, in the order
+ * they were posted and each before the worker's next chunk (its yield is also an immediate), as a
+ * message that has arrived is taken before a yield returns. With timers (1 ms at least) a short job
+ * could finish before a cancel posted right after it arrived.
+ */
 function inProcessWorker(): WorkerPort {
   const listeners: ((m: unknown) => void)[] = [];
   const errors: ((e: Error) => void)[] = [];
   let ended = false;
-  const service = new ProfileService((m) => setTimeout(() => { if (!ended) for (const l of listeners) l(m); }), null);
+  const service = new ProfileService((m) => setImmediate(() => { if (!ended) for (const l of listeners) l(m); }), null);
   return {
-    post: (m) => setTimeout(() => { if (!ended) service.handle(m); }),
+    post: (m) => setImmediate(() => { if (!ended) service.handle(m); }),
     onMessage: (l) => { listeners.push(l); },
     onError: (l) => { errors.push(l); },
     terminate: () => { ended = true; },
