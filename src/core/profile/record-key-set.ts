@@ -3,6 +3,8 @@
 // hundred MB and most of a profile's time; this typed array costs 12 bytes per slot, and keeps a
 // slot's three words side by side so that a probe touches one cache line, not three arrays.
 
+import { touchPages } from '../touch-pages';
+
 const HI_FACTOR = 0x100000; // key = hi * 2^20 + lo, lo < 2^20
 /** Words per slot: hi, lo, row (0: empty). */
 const W = 3;
@@ -168,7 +170,7 @@ export class RecordKeySet {
 
   private rehash(cap: number): void {
     const old = this.slots;
-    const s = new Int32Array(cap * W);
+    const s = touchPages(new Int32Array(cap * W));
     const mask = cap - 1;
     for (let at = 0; at < old.length; at += W) {
       if (old[at + 2] === 0) continue;
