@@ -11,6 +11,7 @@ import type { KindCounts } from '../infer/infer-type';
 import { ByteDictionary, type DictionaryParts } from './byte-dictionary';
 import { SHAPE_DIGITS, SHAPE_IRREGULAR, SHAPE_PADDED, SHAPE_TINY } from '../infer/parse-number-bytes';
 import { radixSortFloat64 } from '../stats/radix-sort';
+import { sortedDifference } from '../stats/sorted-difference';
 import { GrowableCodes } from './growable-codes';
 import { hashBytes, hashString, HyperLogLog } from './hyper-log-log';
 import { countRuns, topRuns, ValueCodes, writeFixed } from './number-counts';
@@ -607,17 +608,13 @@ export class ColumnAccumulator {
     for (let r = 0; r < v.length; r++) if (v[r] === v[r]) sorted[n++] = v[r]!;
     radixSortFloat64(sorted);
     // The values of exceptions (`-0.0000` reads as 0) are in the statistics but count by their text.
+    // They are few (see takeException): taken out of the sorted values, not sorted apart.
     const ex = this.codes;
     let counted = sorted;
     if (ex !== null) {
-      let m = 0;
-      for (let r = 0; r < v.length; r++) if (v[r] === v[r] && ex.get(r) < 0) m++;
-      if (m < n) {
-        counted = new Float64Array(m);
-        m = 0;
-        for (let r = 0; r < v.length; r++) if (v[r] === v[r] && ex.get(r) < 0) counted[m++] = v[r]!;
-        radixSortFloat64(counted);
-      }
+      const out: number[] = [];
+      for (let r = 0; r < v.length; r++) if (v[r] === v[r] && ex.get(r) >= 0) out.push(v[r]!);
+      if (out.length > 0) counted = sortedDifference(sorted, Float64Array.from(out).sort());
     }
     const k = this.limits.heavyCounters;
     const top = topRuns(counted, k).map((x) => ({ value: this.formText(x.value), count: x.count }));
