@@ -269,6 +269,10 @@ export function assembleColumn(acc: ColumnAccumulator, name: string, index: numb
     acc.releaseRows();
     return { column, pending: outcome.pending, totals: outcome.totals, rowValues: null, extremes };
   }
+  // The session reads values of typed columns only (re-binning, standings, group comparisons): a
+  // text column's few number-like cells (`9890360e25` among codes) would keep 8 bytes a row.
+  // Not one still counted by value past its cap, whose counts are made from its values again.
+  if (rowValues === null && !acc.byValue) acc.releaseValues();
   return { column, pending: outcome.pending, totals: outcome.totals, rowValues, extremes };
 }
 

@@ -282,6 +282,14 @@ export class ColumnAccumulator {
   private releasedRows: number | null = null;
 
   /**
+   * Lets the row values go and keeps the other per-row arrays (a session still reads a text
+   * column's codes and kinds): for a column that is not read as numbers or dates once assembled.
+   */
+  releaseValues(): void {
+    this.values = null;
+  }
+
+  /**
    * Lets the per-row arrays (kinds, values, codes, dense counts) go once the column is assembled and
    * nothing will read them again; counts, dictionary and sketches stay. Adding or appending after
    * this is a programming error.

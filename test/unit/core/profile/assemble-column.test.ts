@@ -128,4 +128,24 @@ describe('what the session keeps (retainValues, the editor)', () => {
     expect(day?.n).toBe(3000);
     expect(session.standing('unit', 1)).toBeNull();
   });
+
+  it('lets a text column\'s few number-like cells go, and still compares groups by it', () => {
+    // Lot codes, one in 50 of them digits only (a number to the reader): typed text all the same.
+    const text = 'lot,weight\n' + Array.from({ length: 2000 }, (_, i) => `${i % 50 === 0 ? String(1000 + i) : `L${i % 7}`},${(i % 13) + 0.5}`).join('\n') + '\n';
+    const b = new TextEncoder().encode(text);
+    const st = profileStateOf(b, resolveOptions({}));
+    expect(st.columns[0]!.values).not.toBeNull();
+    const { profile, session } = assembleProfile(st, (o, l) => b.subarray(o, o + l));
+    expect(profile.columns[0]!.type).toBe('text');
+    expect(st.columns[0]!.values).toBeNull();
+    expect(st.columns[1]!.values).not.toBeNull();
+    // Group means by lot against a plain computation over the same cells.
+    const rowsOf = text.trim().split('\n').slice(1).map((l) => l.split(','));
+    const mean = (lot: string) => {
+      const xs = rowsOf.filter((r) => r[0] === lot).map((r) => Number(r[1]));
+      return xs.reduce((a, x) => a + x, 0) / xs.length;
+    };
+    const g = session.compareGroups('weight', 'lot');
+    expect(g?.groups.find((x) => x.value === 'L3')?.mean).toBeCloseTo(mean('L3'), 12);
+  });
 });
