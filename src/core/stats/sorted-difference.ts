@@ -1,11 +1,7 @@
 // Taking a few values out of a long sorted column without sorting it again: a column counted by
 // value past its cap is sorted once for its statistics, and its counts leave out the few cells
 // counted by their text (see ColumnAccumulator.countedBySort).
-
-/** Whether `a` comes before `b` in the order of `Float64Array.prototype.sort` (−0 before +0; no NaN). */
-function before(a: number, b: number): boolean {
-  return a < b || (a === 0 && b === 0 && Object.is(a, -0) && Object.is(b, 0));
-}
+import { sortsBefore } from './sort-runs';
 
 /**
  * The multiset difference `sorted` − `remove`: `sorted` with one occurrence taken out for each
@@ -24,7 +20,7 @@ export function sortedDifference(sorted: Float64Array, remove: Float64Array): Fl
   let j = 0;
   for (let i = 0; i < sorted.length; i++) {
     const x = sorted[i]!;
-    while (j < remove.length && before(remove[j]!, x)) j++;
+    while (j < remove.length && sortsBefore(remove[j]!, x)) j++;
     if (j < remove.length && Object.is(remove[j]!, x)) {
       j++;
       continue;
