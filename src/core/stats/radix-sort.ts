@@ -3,10 +3,13 @@
 // passes over the data.
 
 /**
- * Below this many values the built-in sort is as fast: the radix sort's fixed cost is its four
- * tables of 65 536 counts.
+ * Below this many values the built-in sort is faster: the radix sort's fixed cost is its four
+ * tables of 65 536 counts. Measured on the benchmark machine (Node 20, random doubles): 8 192 values
+ * 0.72 ms radix against 0.48 ms built-in, 16 384 values 0.75 against 1.03 ms, 65 536 values 1.7
+ * against 4.8 ms. A rank sketch sorts its lowest level at its capacity: 65 536 values at the default
+ * exact-values limit, 16 384 at `--exact-limit 300000` (see sketchCapacity).
  */
-export const RADIX_FROM = 1 << 16;
+export const RADIX_FROM = 1 << 14;
 
 const RADIX = 1 << 16;
 const MASK = RADIX - 1;
