@@ -17,6 +17,14 @@ const PASSES = 4;
 
 const littleEndian = new Uint8Array(Float64Array.of(1).buffer)[7] === 0x3f;
 
+// Reused from call to call (a rank sketch sorts one level after another, thousands of times in a
+// large file): 1.25 MiB of counts and a second buffer for short arrays, made once, not per sort.
+const COUNTS = new Uint32Array(PASSES * RADIX);
+const START = new Uint32Array(RADIX);
+/** Arrays up to this long use the shared second buffer; longer ones (a column) get their own. */
+const SHARED_SPARE = 1 << 16;
+let spare = new Float64Array(0);
+
 /**
  * Sorts doubles ascending in place and returns them, in the order `Float64Array.prototype.sort`
  * gives (−Infinity first, −0 before +0, +Infinity last). The values must not hold NaN.
@@ -42,7 +50,8 @@ export function radixSortFloat64(values: Float64Array, from: number = RADIX_FROM
   // Already in order (an id or a time column, written as it grew): one pass tells, and costs
   // little next to the four it saves.
   if (inOrder(values)) return values;
-  const counts = new Uint32Array(PASSES * RADIX);
+  const counts = COUNTS;
+  counts.fill(0);
   let src: Float64Array = values;
   let srcWords: Uint32Array = new Uint32Array(values.buffer, values.byteOffset, 2 * n);
   for (let i = 0; i < n; i++) {
@@ -55,9 +64,10 @@ export function radixSortFloat64(values: Float64Array, from: number = RADIX_FROM
     counts[2 * RADIX + (keyHi & MASK)]!++;
     counts[3 * RADIX + (keyHi >>> 16)]!++;
   }
-  let dst: Float64Array = new Float64Array(n);
-  let dstWords: Uint32Array = new Uint32Array(dst.buffer);
-  const start = new Uint32Array(RADIX);
+  if (n <= SHARED_SPARE && spare.length < n) spare = new Float64Array(SHARED_SPARE);
+  let dst: Float64Array = n <= SHARED_SPARE ? spare.subarray(0, n) : new Float64Array(n);
+  let dstWords: Uint32Array = new Uint32Array(dst.buffer, dst.byteOffset, 2 * n);
+  const start = START;
   for (let pass = 0; pass < PASSES; pass++) {
     const base = pass * RADIX;
     // A digit every value shares: the scatter would leave the order as it is.
